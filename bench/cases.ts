@@ -1,0 +1,35 @@
+/** Circuits for `pnpm bench`, written as circuit-file text so the parser is exercised too. */
+
+/** About six nodes: a sine through two RC sections, an LC section and a loaded tail. */
+export function linearNetwork(steps: number, step: number): string {
+  return `
+circuit: bench-linear-network
+parts:
+  SRC: { voltage: { sine: { amplitude: 1, frequency: 1k } }, between: [in, gnd] }
+  R1: { resistor: 1k, between: [in, n1] }
+  C1: { capacitor: 100n, between: [n1, gnd] }
+  R2: { resistor: 2.2k, between: [n1, n2] }
+  C2: { capacitor: 47n, between: [n2, gnd] }
+  L1: { inductor: 10m, between: [n2, n3] }
+  C3: { capacitor: 100n, between: [n3, gnd] }
+  R3: { resistor: 1k, between: [n3, gnd] }
+  R4: { resistor: 4.7k, between: [n3, n4] }
+  C4: { capacitor: 22n, between: [n4, gnd] }
+  R5: { resistor: 10k, between: [n4, n5] }
+  C5: { capacitor: 10n, between: [n5, gnd] }
+simulate: { duration: ${steps * step}, output-step: ${(steps * step) / 100}, fixed-step: ${step} }
+probes: [n5]
+`;
+}
+
+/** An RC ladder of `sections` sections driven by a square wave. */
+export function rcLadder(sections: number, steps: number, step: number): string {
+  const lines = [`circuit: bench-rc-ladder-${sections}`, 'parts:', '  SRC: { voltage: { square: { low: 0, high: 1, frequency: 1k } }, between: [n0, gnd] }'];
+  for (let i = 1; i <= sections; i++) {
+    lines.push(`  R${i}: { resistor: 100, between: [n${i - 1}, n${i}] }`);
+    lines.push(`  C${i}: { capacitor: 10n, between: [n${i}, gnd] }`);
+  }
+  lines.push(`simulate: { duration: ${steps * step}, output-step: ${(steps * step) / 100}, fixed-step: ${step} }`);
+  lines.push(`probes: [n${sections}]`);
+  return lines.join('\n');
+}

@@ -1,0 +1,56 @@
+import { basename, extname, join } from 'node:path';
+import { simulate } from '@voltcast/core';
+import { readCircuitFile } from '../read-circuit-file.ts';
+import { writeOutputDir } from '../output-dir.ts';
+import { WaveformCsv } from '../waveform-csv.ts';
+import { ExtremesTracker } from '../probe-extremes.ts';
+import { buildReport, writeReport } from '../report.ts';
+import { RunProgress } from '../progress.ts';
+import { runSummary } from '../summary.ts';
+
+export interface RunOptions {
+  /** Output folder; default `out/<circuit file base name>` in the current folder. */
+  out?: string;
+  /** No progress bar and no summary; warnings and errors still go to stderr. */
+  quiet?: boolean;
+}
+
+/** `voltcast run FILE`: simulate, stream `waveforms.csv`, write the reports, print a summary. */
+export function runCommand(file: string, options: RunOptions): void {
+  const { circuit, fileName, warnings } = readCircuitFile(file);
+  for (const warning of warnings) console.error(warning);
+  const outDir = options.out ?? defaultOutDir(fileName);
+  const progress = new RunProgress(circuit.simulate.duration, !options.quiet);
+  const startedAt = performance.now();
+
+  const { report, files } = writeOutputDir(outDir, (staging) => {
+    const csv = new WaveformCsv(join(staging, 'waveforms.csv'), circuit.probes);
+    const extremes = new ExtremesTracker(circuit.probes);
+    let result;
+    try {
+      result = simulate(circuit, {
+        keepColumns: false,
+        onRow: (time, values) => {
+          csv.row(time, values);
+          extremes.add(values);
+        },
+        onProgress: (fraction) => progress.update(fraction),
+      });
+    } finally {
+      progress.stop();
+      csv.close();
+    }
+    const report = buildReport(circuit, fileName, result, extremes.results());
+    const names = ['waveforms.csv', ...writeReport(staging, report).map((path) => basename(path))];
+    return { report, files: names };
+  });
+
+  if (!options.quiet) {
+    const wallSeconds = (performance.now() - startedAt) / 1000;
+    console.log(runSummary(report, circuit, wallSeconds, files.map((name) => join(outDir, name))));
+  }
+}
+
+function defaultOutDir(file: string): string {
+  return join('out', basename(file, extname(file)));
+}

@@ -1,0 +1,59 @@
+import { readFileSync } from 'node:fs';
+import { dirname, join, resolve } from 'node:path';
+import { readCircuit, formatIssue, type Circuit } from '@voltcast/core';
+import { InputError } from './exit-codes.ts';
+
+/** A circuit read from disk, with the warnings the reader found (already formatted). */
+export interface CircuitFile {
+  readonly circuit: Circuit;
+  /** The path as the user wrote it; messages use it so editors can jump to the place. */
+  readonly fileName: string;
+  readonly warnings: readonly string[];
+}
+
+/**
+ * Read and validate a circuit file. Files it names (file waves) are resolved relative to the
+ * circuit file's folder, so a circuit and its data move together. Any error becomes an
+ * `InputError` (exit 2) listing every issue as `file:line:column: ...` with its hint, warnings
+ * included, so one run shows everything to fix.
+ */
+export function readCircuitFile(fileName: string): CircuitFile {
+  let text: string;
+  try {
+    text = readFileSync(fileName, 'utf8');
+  } catch (error) {
+    throw new InputError(`cannot read circuit file ${fileName}: ${describeFsError(error)} (looked for ${resolve(fileName)})`);
+  }
+  const folder = dirname(fileName);
+  const { circuit, issues } = readCircuit(text, {
+    fileName,
+    // The reader reports a failure at the file name's line and column; say where we looked.
+    readFile: (relativePath: string) => {
+      const path = join(folder, relativePath);
+      try {
+        return readFileSync(path, 'utf8');
+      } catch (error) {
+        throw new Error(`${describeFsError(error)} (looked for ${path})`);
+      }
+    },
+  });
+  const formatted = issues.map((issue) => formatIssue(issue, fileName));
+  const errorCount = issues.filter((issue) => issue.severity === 'error').length;
+  if (circuit === undefined || errorCount > 0) {
+    const count = errorCount === 1 ? '1 error' : `${errorCount} errors`;
+    throw new InputError(`${formatted.join('\n')}\n${fileName}: ${count}, nothing simulated`);
+  }
+  return {
+    circuit,
+    fileName,
+    warnings: issues.filter((issue) => issue.severity === 'warning').map((issue) => formatIssue(issue, fileName)),
+  };
+}
+
+function describeFsError(error: unknown): string {
+  const code = (error as NodeJS.ErrnoException).code;
+  if (code === 'ENOENT') return 'no such file';
+  if (code === 'EISDIR') return 'it is a folder, not a file';
+  if (code === 'EACCES') return 'permission denied';
+  return error instanceof Error ? error.message : String(error);
+}

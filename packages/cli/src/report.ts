@@ -1,0 +1,96 @@
+import { writeFileSync } from 'node:fs';
+import { join } from 'node:path';
+import { formatSI, type Circuit, type RunStats, type TransientResult } from '@voltcast/core';
+import type { ProbeExtremes } from './probe-extremes.ts';
+import { textTable } from './text-table.ts';
+
+/** What `report.json` holds. Every number is in SI base units (seconds, volts, amperes). */
+export interface RunReport {
+  readonly circuit: string;
+  /** The circuit file as given on the command line. */
+  readonly file: string;
+  readonly settings: Circuit['simulate'];
+  readonly stats: RunStats;
+  /** Voltage of every named node at t = 0. */
+  readonly operatingPoint: Record<string, number>;
+  readonly probes: Record<string, { min: number; max: number; final: number }>;
+}
+
+/**
+ * Wall time is left out on purpose: the same circuit gives the same report, so reports can be
+ * compared between runs and kept as expected data.
+ */
+export function buildReport(
+  circuit: Circuit,
+  file: string,
+  result: TransientResult,
+  extremes: readonly ProbeExtremes[],
+): RunReport {
+  return {
+    circuit: circuit.name,
+    file,
+    settings: circuit.simulate,
+    stats: result.stats,
+    operatingPoint: Object.fromEntries(result.operatingPoint),
+    probes: Object.fromEntries(extremes.map(({ probe, min, max, final }) => [probe, { min, max, final }])),
+  };
+}
+
+/** Write `report.json` and `report.txt` into `folder`; returns their paths. */
+export function writeReport(folder: string, report: RunReport): string[] {
+  const jsonPath = join(folder, 'report.json');
+  const textPath = join(folder, 'report.txt');
+  writeFileSync(jsonPath, JSON.stringify(report, null, 2) + '\n');
+  writeFileSync(textPath, reportText(report));
+  return [jsonPath, textPath];
+}
+
+/** The report for people: the same content as the JSON, aligned, with SI prefixes. */
+export function reportText(report: RunReport): string {
+  const { settings, stats } = report;
+  const lines = [
+    `voltcast run report: ${report.circuit}`,
+    `file: ${report.file}`,
+    '',
+    'settings',
+    ...textTable([
+      ['duration', formatSI(settings.duration, 's')],
+      ['output step', formatSI(settings.outputStep, 's')],
+      ['max step', formatSI(settings.maxStep, 's')],
+      ...(settings.fixedStep !== undefined ? [['fixed step', formatSI(settings.fixedStep, 's')]] : []),
+      ['relative tolerance', String(settings.relativeTolerance)],
+      ['voltage tolerance', formatSI(settings.voltageTolerance, 'V')],
+      ['current tolerance', formatSI(settings.currentTolerance, 'A')],
+    ]),
+    '',
+    'work',
+    ...textTable([
+      ['steps accepted', String(stats.acceptedSteps)],
+      ['steps rejected', String(stats.rejectedSteps)],
+      ['damping steps (backward Euler)', String(stats.dampingSteps)],
+      ['LU factorizations', String(stats.factorizations)],
+      ['linear solves', String(stats.solves)],
+      ['Newton iterations', String(stats.newtonIterations)],
+      ['Newton failures', String(stats.newtonFailures)],
+      ['smallest step', formatSI(stats.minStep, 's')],
+      ['largest step', formatSI(stats.maxStep, 's')],
+    ]),
+    '',
+    'operating point (t = 0)',
+    ...textTable(Object.entries(report.operatingPoint).map(([node, volts]) => [node, formatSI(volts, 'V')])),
+    '',
+    'probes',
+    ...probeTable(report.probes, true),
+  ];
+  return lines.join('\n') + '\n';
+}
+
+/** Per-probe table with a header row; `withFinal` adds the final value column. */
+export function probeTable(probes: RunReport['probes'], withFinal: boolean): string[] {
+  const header = withFinal ? ['node', 'min', 'max', 'final'] : ['node', 'min', 'max'];
+  const rows = Object.entries(probes).map(([node, p]) => {
+    const row = [node, formatSI(p.min, 'V'), formatSI(p.max, 'V')];
+    return withFinal ? [...row, formatSI(p.final, 'V')] : row;
+  });
+  return textTable([header, ...rows]);
+}

@@ -1,0 +1,39 @@
+import type { PartSpecBase } from '../parts/part-kind.ts';
+
+/** How to step through time; every value in SI base units. */
+export interface SimulateSettings {
+  /** End time of the run (the run starts at 0). */
+  readonly duration: number;
+  /** Spacing of output rows; the stepper lands on each row time exactly. */
+  readonly outputStep: number;
+  /** Cap on the internal step. */
+  readonly maxStep: number;
+  /** When set, every step has this size (no error control): for convergence studies. */
+  readonly fixedStep?: number;
+  /** Relative tolerance of the local truncation error per step. */
+  readonly relativeTolerance: number;
+  /** Absolute tolerance for node voltages, volts. */
+  readonly voltageTolerance: number;
+  /** Absolute tolerance for branch currents, amperes. */
+  readonly currentTolerance: number;
+}
+
+/** A validated circuit: what the parser returns and what `simulate` takes. */
+export interface Circuit {
+  readonly name: string;
+  readonly parts: readonly PartSpecBase[];
+  readonly simulate: SimulateSettings;
+  /** Node names recorded as output columns, in order. */
+  readonly probes: readonly string[];
+  /** Every node name except `gnd`, in order of first appearance. */
+  readonly nodes: readonly string[];
+}
+
+/** Defaults for `simulate:` keys the file leaves out. */
+export const simulateDefaults = {
+  /** Output rows when `output-step` is absent: duration / 1000. */
+  rowsWhenUnset: 1000,
+  relativeTolerance: 1e-4,
+  voltageTolerance: 1e-6,
+  currentTolerance: 1e-9,
+} as const;

@@ -1,0 +1,172 @@
+import { Document, LineCounter, parseDocument, type YAMLError } from 'yaml';
+import type { Circuit, SimulateSettings } from './circuit.ts';
+import { simulateDefaults } from './circuit.ts';
+import { CircuitError, type CircuitIssue } from './issue.ts';
+import type { MapReader, ReadContext, ValueReader } from './reader.ts';
+import { IssueSink, YamlValue } from './yaml-reader.ts';
+import { selectKind } from './select-kind.ts';
+import { checkConnections, nodesInOrder } from './connections.ts';
+import { suggestion } from './suggest.ts';
+import { partKinds } from '../parts/index.ts';
+import type { PartSpecBase } from '../parts/part-kind.ts';
+import { quantities } from '../units/quantity.ts';
+import { formatSI } from '../units/format.ts';
+
+export interface ParseOptions extends ReadContext {
+  /** Shown in error messages (`file:line:column`). */
+  fileName?: string;
+}
+
+export interface ReadCircuitResult {
+  /** Present when there is no error (warnings may remain). */
+  circuit?: Circuit;
+  /** Every error and warning found, in document order of discovery. */
+  issues: CircuitIssue[];
+}
+
+/** Above this many output rows a run is probably a typo in `output-step`. */
+const manyRows = 1e7;
+
+/**
+ * Read and validate a circuit file. Never throws on bad input: every problem (YAML syntax,
+ * unknown keys, bad values, dangling nodes) is an issue with its line and column. When the
+ * YAML itself is broken only the syntax errors are reported, since the rest would mislead.
+ */
+export function readCircuit(text: string, options: ParseOptions = {}): ReadCircuitResult {
+  const lines = new LineCounter();
+  const document = parseDocument(text, { lineCounter: lines, prettyErrors: false, uniqueKeys: false });
+  const sink = new IssueSink(document, lines);
+  const syntax = (severity: 'error' | 'warning') => (problem: YAMLError) => {
+    const { line, col } = lines.linePos(problem.pos[0]);
+    sink.add({
+      severity,
+      message: `YAML: ${problem.message}`,
+      hint: 'check the indentation, colons and brackets here and on the line before',
+      path: [],
+      position: { line, column: col },
+    });
+  };
+  document.errors.forEach(syntax('error'));
+  document.warnings.forEach(syntax('warning'));
+  if (document.errors.length > 0) return { issues: sink.issues };
+  const result = readDocument(document, sink, options, { line: 1, column: 1 });
+  // Every issue read from text has a position: list them top to bottom, as an editor would.
+  const at = (issue: CircuitIssue) => (issue.position?.line ?? 0) * 1e6 + (issue.position?.column ?? 0);
+  result.issues.sort((a, b) => at(a) - at(b));
+  return result;
+}
+
+/** Like `readCircuit`, but throws a `CircuitError` carrying every issue when there is an error. */
+export function parseCircuit(text: string, options: ParseOptions = {}): Circuit {
+  const { circuit, issues } = readCircuit(text, options);
+  if (circuit === undefined) throw new CircuitError(issues, options.fileName);
+  return circuit;
+}
+
+/**
+ * Validate a circuit written as a plain object of the file's shape, e.g.
+ * `{ circuit: 'demo', parts: { R1: { resistor: '10k', between: ['in', 'gnd'] } }, ... }`.
+ * Same checks and messages as for files (issues carry key paths, no positions).
+ * Throws a `CircuitError` when there is an error.
+ */
+export function buildCircuit(description: object, options: ParseOptions = {}): Circuit {
+  const document = new Document(description);
+  const { circuit, issues } = readDocument(document, new IssueSink(document), options, undefined);
+  if (circuit === undefined) throw new CircuitError(issues, options.fileName);
+  return circuit;
+}
+
+function readDocument(document: Document, sink: IssueSink, context: ReadContext, start: { line: number; column: number } | undefined): ReadCircuitResult {
+  const root = new YamlValue(sink, document.contents, [], start);
+  if (root.kind() !== 'map') {
+    root.fail(root.kind() === 'null' ? 'the circuit is empty' : 'a circuit must be a map of keys', 'a circuit needs the keys circuit:, parts: and simulate:');
+    return { issues: sink.issues };
+  }
+  const top = root.map();
+  const name = readName(top);
+  const parts = readParts(top.need('parts', 'list the parts under parts:, e.g. R1: { resistor: 10k, between: [in, out] }'), context);
+  const simulate = readSimulate(top.need('simulate', 'write simulate: { duration: 10m }'));
+  const probesValue = top.get('probes');
+  top.finish();
+
+  const nodes = nodesInOrder(parts.specs);
+  const probes = probesValue === undefined ? nodes : readProbes(probesValue, nodes);
+  // With a part unread its pins are unknown, and the connection checks would only mislead.
+  if (parts.complete) checkConnections(parts.specs, probesValue === undefined ? [] : probes, top.get('parts'), sink);
+
+  if (sink.issues.some((issue) => issue.severity === 'error')) return { issues: sink.issues };
+  return { circuit: { name, parts: parts.specs, simulate, probes, nodes }, issues: sink.issues };
+}
+
+function readName(top: MapReader): string {
+  const value = top.need('circuit', 'start the file with circuit: and a name for it');
+  const name = value?.text() ?? '';
+  if (value !== undefined && value.kind() === 'scalar' && name.trim() === '') value.fail('the circuit name is empty', 'write circuit: and a name');
+  return name;
+}
+
+/** The parts read; `complete` is false when a part's kind could not be determined. */
+function readParts(value: ValueReader | undefined, context: ReadContext): { specs: PartSpecBase[]; complete: boolean } {
+  if (value === undefined) return { specs: [], complete: false };
+  const map = value.map();
+  const specs: PartSpecBase[] = [];
+  if (value.kind() === 'map' && map.keys().length === 0) value.fail('the circuit has no parts', 'add parts, e.g. R1: { resistor: 10k, between: [in, out] }');
+  for (const name of map.keys()) {
+    const spec = readPart(name, map.get(name)!, context);
+    if (spec !== undefined) specs.push(spec);
+  }
+  map.finish();
+  return { specs, complete: value.kind() === 'map' && specs.length === map.keys().length };
+}
+
+function readPart(name: string, value: ValueReader, context: ReadContext): PartSpecBase | undefined {
+  const example = '{ resistor: 10k, between: [in, out] }';
+  if (value.kind() !== 'map') {
+    value.fail(`part '${name}' must be a map with one kind key`, `for example ${name}: ${example}`);
+    return undefined;
+  }
+  const options = value.map();
+  const kind = selectKind(options, partKinds, 'a part', example);
+  if (kind === undefined) return undefined;
+  const spec = kind.read(name, options.get(kind.key)!, options, context);
+  options.finish();
+  return spec;
+}
+
+function readSimulate(value: ValueReader | undefined): SimulateSettings {
+  const keys = value?.map();
+  const time = quantities.time;
+  const positive = { above: 0 };
+  const duration = keys?.need('duration', 'write duration: 10m, the end time of the run')?.number(time, positive) ?? NaN;
+  const outputStep = keys?.numberOr('output-step', time, duration / simulateDefaults.rowsWhenUnset, positive) ?? NaN;
+  if (outputStep > duration) keys?.get('output-step')?.fail(`output-step ${formatSI(outputStep, 's')} is longer than the duration ${formatSI(duration, 's')}`, 'make it at most the duration; the default is duration / 1000');
+  else if (duration / outputStep > manyRows) keys?.get('output-step')?.warn(`output-step ${formatSI(outputStep, 's')} makes ${formatSI(duration / outputStep, '')} rows`, 'check the prefix: m is milli, u is micro, n is nano');
+  const fixedValue = keys?.get('fixed-step');
+  const fixedStep = fixedValue?.number(time, positive);
+  if (fixedStep !== undefined && fixedStep > duration) fixedValue?.fail(`fixed-step ${formatSI(fixedStep, 's')} is longer than the duration ${formatSI(duration, 's')}`);
+  const settings: SimulateSettings = {
+    duration,
+    outputStep,
+    maxStep: keys?.numberOr('max-step', time, outputStep, positive) ?? NaN,
+    fixedStep,
+    relativeTolerance: keys?.numberOr('relative-tolerance', quantities.fraction, simulateDefaults.relativeTolerance, { above: 0, max: 1 }) ?? NaN,
+    voltageTolerance: keys?.numberOr('voltage-tolerance', quantities.voltage, simulateDefaults.voltageTolerance, positive) ?? NaN,
+    currentTolerance: keys?.numberOr('current-tolerance', quantities.current, simulateDefaults.currentTolerance, positive) ?? NaN,
+  };
+  keys?.finish();
+  return settings;
+}
+
+function readProbes(value: ValueReader, nodes: readonly string[]): string[] {
+  const known = new Set(nodes);
+  const probes: string[] = [];
+  for (const item of value.list()) {
+    const name = item.node();
+    if (name === '') continue;
+    if (name === 'gnd') item.fail('gnd is ground, always 0 V: it has no column', 'remove gnd from probes');
+    else if (!known.has(name)) item.fail(`probe '${name}' names no node of this circuit`, suggestion(name, nodes, 'nodes'));
+    else if (probes.includes(name)) item.warn(`probe '${name}' is listed twice`, 'remove the repeat');
+    else probes.push(name);
+  }
+  return probes;
+}

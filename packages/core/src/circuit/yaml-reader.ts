@@ -1,0 +1,286 @@
+import { isAlias, isMap, isScalar, isSeq, type Document, type LineCounter } from 'yaml';
+import type { CircuitIssue, SourcePosition } from './issue.ts';
+import type { MapReader, NumberLimits, ValueReader } from './reader.ts';
+import { suggestion } from './suggest.ts';
+import type { Quantity } from '../units/quantity.ts';
+import { parseQuantity } from '../units/si.ts';
+import { formatSI } from '../units/format.ts';
+
+type Path = readonly (string | number)[];
+
+/** Collects the issues of one read and turns node offsets into line and column. */
+export class IssueSink {
+  readonly issues: CircuitIssue[] = [];
+  constructor(
+    private readonly document: Document,
+    private readonly lines?: LineCounter,
+  ) {}
+
+  /** Where a node starts; absent for documents built from objects, which have no text. */
+  positionOf(node: unknown): SourcePosition | undefined {
+    const range = (node as { range?: readonly number[] } | null)?.range;
+    if (range === undefined || this.lines === undefined) return undefined;
+    const { line, col } = this.lines.linePos(range[0]);
+    return { line, column: col };
+  }
+
+  /** Follow `*alias` to the node it names. */
+  resolve(node: unknown): unknown {
+    return isAlias(node) ? node.resolve(this.document) : node;
+  }
+
+  add(issue: CircuitIssue): void {
+    this.issues.push(issue);
+  }
+}
+
+/**
+ * A value of the YAML document, read as the circuit format reads values. Failed reads record
+ * an issue and return a placeholder, so one pass finds every problem.
+ */
+export class YamlValue implements ValueReader {
+  readonly position?: SourcePosition;
+  readonly part?: string;
+  private mapReader?: YamlMap;
+
+  constructor(
+    protected readonly sink: IssueSink,
+    node: unknown,
+    readonly path: Path,
+    /** Used when the node has no position of its own (an empty value: its key's position). */
+    fallback?: SourcePosition,
+  ) {
+    this.yaml = sink.resolve(node);
+    this.position = sink.positionOf(this.yaml) ?? fallback;
+    // Everything under `parts.NAME` belongs to part NAME.
+    if (path[0] === 'parts' && path.length >= 2) this.part = String(path[1]);
+  }
+  /** The YAML node (or, in a document built from an object, possibly a raw value). */
+  protected readonly yaml: unknown;
+
+  kind(): 'map' | 'list' | 'scalar' | 'null' {
+    if (isMap(this.yaml)) return 'map';
+    if (isSeq(this.yaml)) return 'list';
+    return this.scalar() === null ? 'null' : 'scalar';
+  }
+
+  number(quantity: Quantity, limits?: NumberLimits): number {
+    const raw = this.scalar();
+    if (typeof raw !== 'number' && typeof raw !== 'string') {
+      this.fail(`expected a ${quantity.name}, found ${this.describe()}`);
+      return NaN;
+    }
+    const parsed = parseQuantity(raw, quantity);
+    if ('error' in parsed) {
+      this.fail(parsed.error, parsed.hint);
+      return NaN;
+    }
+    return limits === undefined ? parsed.value : this.checkLimits(parsed.value, quantity, limits);
+  }
+
+  text(): string {
+    const raw = this.scalar();
+    if (typeof raw === 'string') return raw;
+    if (typeof raw === 'number') return this.source();
+    this.fail(`expected text, found ${this.describe()}`);
+    return '';
+  }
+
+  node(): string {
+    const raw = this.scalar();
+    if (typeof raw !== 'string' && typeof raw !== 'number') {
+      this.fail(`expected a node name, found ${this.describe()}`, 'write a name such as in, out or gnd');
+      return '';
+    }
+    const name = typeof raw === 'number' ? this.source() : raw;
+    if (name === '') {
+      this.fail('a node name cannot be empty', 'write a name such as in, out or gnd');
+      return '';
+    }
+    if (/[\s,"]/.test(name)) {
+      this.fail(`node name '${name}' contains a space, comma or quote`, 'node names become CSV column names: use letters, digits, _, - or .');
+      return '';
+    }
+    return name;
+  }
+
+  list(): ValueReader[] {
+    if (!isSeq(this.yaml)) {
+      this.fail(`expected a list like [a, b], found ${this.describe()}`);
+      return [];
+    }
+    return this.yaml.items.map((item, i) => new YamlValue(this.sink, item, [...this.path, i], this.position));
+  }
+
+  map(): MapReader {
+    if (this.mapReader === undefined) {
+      if (!isMap(this.yaml)) this.fail(`expected a map of key: value pairs, found ${this.describe()}`);
+      this.mapReader = new YamlMap(this.sink, isMap(this.yaml) ? this.yaml : undefined, this.path, this.position);
+    }
+    return this.mapReader;
+  }
+
+  fail(message: string, hint?: string): void {
+    this.report('error', message, hint);
+  }
+
+  warn(message: string, hint?: string): void {
+    this.report('warning', message, hint);
+  }
+
+  protected report(severity: 'error' | 'warning', message: string, hint?: string, path: Path = this.path, position = this.position): void {
+    this.sink.add({ severity, message, hint: hint || undefined, path, part: this.part, position });
+  }
+
+  /** The scalar's value, `null` for an empty value, `undefined` for a map or list. */
+  private scalar(): unknown {
+    if (this.yaml === null || this.yaml === undefined) return null;
+    if (isScalar(this.yaml)) return this.yaml.value ?? null;
+    if (isMap(this.yaml) || isSeq(this.yaml)) return undefined;
+    return this.yaml; // a raw JavaScript value of a document built from an object
+  }
+
+  /** The scalar as written (`007`, not 7), when the document has text. */
+  private source(): string {
+    const source = isScalar(this.yaml) ? this.yaml.source : undefined;
+    return typeof source === 'string' && source !== '' ? source : String(this.scalar());
+  }
+
+  /** What the value is, for "expected X, found Y". */
+  private describe(): string {
+    switch (this.kind()) {
+      case 'map':
+        return 'a map';
+      case 'list':
+        return 'a list';
+      case 'null':
+        return 'nothing';
+      default: {
+        const raw = this.scalar();
+        return typeof raw === 'string' ? `'${raw}'` : String(raw);
+      }
+    }
+  }
+
+  private checkLimits(value: number, quantity: Quantity, limits: NumberLimits): number {
+    const unit = quantity.units[0] ?? '';
+    const shown = (n: number) => formatSI(n, unit.includes('/') ? '' : unit, 6);
+    const found = `found ${this.describe()}`;
+    // Name the value by its key (`duration must be ...`) when it has one.
+    const key = this.path[this.path.length - 1];
+    const what = typeof key === 'string' ? key : quantity.name;
+    if (limits.above !== undefined && !(value > limits.above)) {
+      this.fail(`${what} must be greater than ${shown(limits.above)}, ${found}`);
+    } else if (limits.min !== undefined && !(value >= limits.min)) {
+      this.fail(`${what} must be at least ${shown(limits.min)}, ${found}`);
+    } else if (limits.max !== undefined && !(value <= limits.max)) {
+      this.fail(`${what} must be at most ${shown(limits.max)}, ${found}`);
+    } else if (limits.integer && !Number.isInteger(value)) {
+      this.fail(`${what} must be a whole number, ${found}`);
+    } else {
+      return value;
+    }
+    return NaN;
+  }
+}
+
+interface Entry {
+  readonly key: string;
+  readonly keyPosition?: SourcePosition;
+  readonly value: unknown;
+}
+
+/** A map of the document. Keys asked for become known; `finish` reports the others. */
+export class YamlMap extends YamlValue implements MapReader {
+  private readonly entries = new Map<string, Entry>();
+  private readonly children = new Map<string, YamlValue>();
+  private readonly known = new Set<string>();
+  private finished = false;
+
+  constructor(sink: IssueSink, node: unknown, path: Path, fallback?: SourcePosition) {
+    super(sink, node, path, fallback);
+    if (isMap(this.yaml)) for (const pair of this.yaml.items) this.addEntry(pair.key, pair.value);
+  }
+
+  override map(): MapReader {
+    return this;
+  }
+
+  keys(): string[] {
+    return [...this.entries.keys()];
+  }
+
+  has(key: string): boolean {
+    this.known.add(key);
+    return this.entries.has(key);
+  }
+
+  get(key: string): ValueReader | undefined {
+    this.known.add(key);
+    const entry = this.entries.get(key);
+    if (entry === undefined) return undefined;
+    let child = this.children.get(key);
+    if (child === undefined) {
+      child = new YamlValue(this.sink, entry.value, [...this.path, key], entry.keyPosition);
+      this.children.set(key, child);
+    }
+    return child;
+  }
+
+  need(key: string, hint?: string): ValueReader | undefined {
+    const value = this.get(key);
+    // A stand-in for a value that was not a map (already reported) lacks every key: say nothing more.
+    if (value === undefined && isMap(this.yaml)) this.report('error', `missing key '${key}'`, hint, [...this.path, key]);
+    return value;
+  }
+
+  numberOr(key: string, quantity: Quantity, fallback: number, limits?: NumberLimits): number {
+    const value = this.get(key);
+    return value === undefined ? fallback : value.number(quantity, limits);
+  }
+
+  choiceOr<T extends string>(key: string, choices: readonly T[], fallback: T): T {
+    const value = this.get(key);
+    if (value === undefined) return fallback;
+    const word = value.text();
+    if ((choices as readonly string[]).includes(word)) return word as T;
+    value.fail(`'${word}' is not one of ${choices.join(', ')}`, suggestion(word, choices, 'choose one of'));
+    return fallback;
+  }
+
+  allow(...keys: string[]): void {
+    for (const key of keys) this.known.add(key);
+  }
+
+  finish(): void {
+    if (this.finished) return;
+    this.finished = true;
+    const known = [...this.known];
+    for (const entry of this.entries.values()) {
+      if (this.known.has(entry.key)) continue;
+      this.report('error', `unknown key '${entry.key}'`, suggestion(entry.key, known, 'keys known here'), [...this.path, entry.key], entry.keyPosition ?? this.position);
+    }
+  }
+
+  private addEntry(keyNode: unknown, value: unknown): void {
+    const resolved = this.sink.resolve(keyNode);
+    const keyPosition = this.sink.positionOf(resolved) ?? this.position;
+    const raw = isScalar(resolved) ? resolved.value : resolved;
+    if (typeof raw !== 'string' && typeof raw !== 'number') {
+      this.report('error', 'a key must be a plain word', 'write `name: value`', this.path, keyPosition);
+      return;
+    }
+    const key = String(raw);
+    const first = this.entries.get(key);
+    if (first === undefined) {
+      this.entries.set(key, { key, keyPosition, value });
+      return;
+    }
+    const where = first.keyPosition ? ` (first at line ${first.keyPosition.line}, column ${first.keyPosition.column})` : '';
+    // Under `parts:` the keys are part names: say so, since that is what the user sees.
+    const isPartList = this.path.length === 1 && this.path[0] === 'parts';
+    const message = isPartList ? `part name '${key}' is used twice${where}` : `key '${key}' appears twice${where}`;
+    const hint = isPartList ? 'give each part its own name' : 'keep one of them';
+    this.sink.add({ severity: 'error', message, hint, path: [...this.path, key], part: isPartList ? key : this.part, position: keyPosition });
+  }
+}

@@ -1,0 +1,27 @@
+/**
+ * voltcast core: circuit files, modified nodal analysis, trapezoidal transient analysis,
+ * op-amp macro-model and ADC prediction. No file system or process access: runs in Node,
+ * a worker or a browser. The host supplies file contents through `readFile` callbacks.
+ *
+ * @packageDocumentation
+ */
+export { readCircuit, parseCircuit, buildCircuit } from './circuit/parse-circuit.ts';
+export type { ParseOptions } from './circuit/parse-circuit.ts';
+export type { Circuit, SimulateSettings } from './circuit/circuit.ts';
+export { CircuitError, formatIssue } from './circuit/issue.ts';
+export type { CircuitIssue, SourcePosition } from './circuit/issue.ts';
+export type { ValueReader, MapReader, ReadContext, NumberLimits } from './circuit/reader.ts';
+
+export { parseQuantity, formatSI } from './units/index.ts';
+export { quantities } from './units/quantity.ts';
+export type { Quantity } from './units/quantity.ts';
+
+export { partKinds, partKind } from './parts/index.ts';
+export type { Device, Binder, Mna, StepInfo, Method, Link, PartKind, PartSpecBase, PinRef } from './parts/index.ts';
+
+export { waveKinds, readStimulus } from './waves/index.ts';
+export type { Wave, WaveKind } from './waves/wave.ts';
+
+export { simulate } from './transient/simulate.ts';
+export type { TransientResult, RunStats, SimulateOptions } from './transient/result.ts';
+export { SimulationError } from './transient/simulation-error.ts';

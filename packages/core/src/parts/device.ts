@@ -1,0 +1,88 @@
+/**
+ * The engine's view of a part. A device stamps itself into the modified nodal equations
+ * `G·x = b`; it never sees the step control. The contract, in the order the stepper calls:
+ *
+ * 1. `bind` once: resolve pins to unknown indices and reserve extra unknowns (branch
+ *    currents, internal nodes). Index -1 is ground; stamps to it are dropped by `Mna`.
+ * 2. `stampStatic` once: matrix entries that never change in a run (resistors, the incidence
+ *    of voltage-defined branches).
+ * 3. `stampStep` whenever the step size or method changes: companion conductances. With
+ *    `step.method === 'dc'` it stamps the operating-point form (capacitor open, inductor short).
+ * 4. `stampRhs` every step attempt: source values at `step.t` (scaled by `step.sourceScale`)
+ *    and companion history terms.
+ * 5. `stampNewton` every Newton iteration, for nonlinear devices only: the linearization at
+ *    the current iterate `x` (matrix and right-hand side). It returns true when it limited
+ *    the step and linearized elsewhere than at `x`: that iteration cannot count as converged.
+ * 6. `accept` when a step (or the operating point) is accepted: update history from `x`.
+ *
+ * Devices allocate nothing after `bind`: steps 2 to 6 run in the per-step loop.
+ */
+export interface Device {
+  readonly name: string;
+  /** The kind key, e.g. `resistor`. */
+  readonly kind: string;
+  bind(binder: Binder): void;
+  stampStatic?(m: Mna): void;
+  stampStep?(m: Mna, step: StepInfo): void;
+  stampRhs?(m: Mna, step: StepInfo): void;
+  stampNewton?(m: Mna, x: Float64Array, step: StepInfo): boolean;
+  accept?(x: Float64Array, step: StepInfo): void;
+  /**
+   * For piecewise devices: a small integer naming the piece the solution `x` lies in (an
+   * amplifier at a rail: -1, 0, 1). A change between steps is an event: the stepper narrows
+   * the step down onto it and damps after it as after a corner.
+   */
+  region?(x: Float64Array): number;
+  /** First corner of this device's stimulus strictly after `t`, or Infinity. */
+  nextCorner?(t: number): number;
+  /** How the device connects its pins, for diagnosing a singular matrix by cause. */
+  links(): readonly Link[];
+  /**
+   * Unknowns whose local truncation error the step control watches besides node voltages
+   * (inductor currents).
+   */
+  stateUnknowns?(): readonly number[];
+}
+
+/**
+ * `conductive`: a DC path (resistor, inductor, source output). `voltage`: fixes the voltage
+ * between its ends (voltage source, inductor at DC, amplifier output); a loop of these is
+ * singular. `none`: no DC path (capacitor, current source).
+ */
+export interface Link {
+  readonly a: number;
+  readonly b: number;
+  readonly kind: 'conductive' | 'voltage' | 'none';
+}
+
+export type Method = 'dc' | 'be' | 'trap';
+
+/** The step being attempted. Reused by the stepper, never retained by devices. */
+export interface StepInfo {
+  /** Time at the end of the step (the time being solved for). */
+  t: number;
+  /** Step size; 0 for the operating point. */
+  h: number;
+  method: Method;
+  /** Homotopy factor for the operating point: independent sources are scaled by it. */
+  sourceScale: number;
+}
+
+/** Resolves pins and reserves unknowns while devices bind. */
+export interface Binder {
+  /** Index of a node by name; `gnd` is -1. */
+  node(name: string): number;
+  /** Reserve a branch-current unknown, labelled for messages (e.g. `L1 current`). */
+  branch(label: string): number;
+  /** Reserve an internal node voltage unknown, labelled for messages. */
+  internal(label: string): number;
+}
+
+/** Assembly target. Index -1 (ground) is ignored in both calls. */
+export interface Mna {
+  readonly size: number;
+  /** Add `value` to the matrix entry at (row, col). */
+  add(row: number, col: number, value: number): void;
+  /** Add `value` to the right-hand side at `row`. */
+  rhs(row: number, value: number): void;
+}

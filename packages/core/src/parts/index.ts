@@ -1,0 +1,29 @@
+import type { PartKind, PartSpecBase } from './part-kind.ts';
+import { resistor } from './resistor.ts';
+import { capacitor } from './capacitor.ts';
+import { inductor } from './inductor.ts';
+import { voltageSource } from './voltage-source.ts';
+import { currentSource } from './current-source.ts';
+import { vcvs } from './vcvs.ts';
+import { opamp } from './opamp.ts';
+
+export type { Device, Binder, Mna, StepInfo, Method, Link } from './device.ts';
+export type { PartKind, PartSpecBase, PinRef } from './part-kind.ts';
+
+/** Every part kind, by its YAML key. Adding a kind: one file and one line here. */
+export const partKinds: readonly PartKind<any>[] = [
+  resistor,
+  capacitor,
+  inductor,
+  voltageSource,
+  currentSource,
+  vcvs,
+  opamp,
+];
+
+/** The kind for a spec's `kind` key. */
+export function partKind(key: string): PartKind<PartSpecBase> {
+  const kind = partKinds.find((k) => k.key === key);
+  if (kind === undefined) throw new Error(`internal: unknown part kind ${key}`);
+  return kind;
+}

@@ -1,0 +1,283 @@
+import type { MapReader, ValueReader } from '../circuit/reader.ts';
+import { parseQuantity } from '../units/si.ts';
+import { quantities } from '../units/quantity.ts';
+import { stampBranchIncidence, stampConductance, stampCurrent } from '../solver/stamps.ts';
+import { across, CapacitorCompanion } from './capacitor-companion.ts';
+import type { Binder, Device, Link, Mna, StepInfo } from './device.ts';
+import type { PartKind, PartSpecBase, PinRef } from './part-kind.ts';
+import { nodeOf, pinRef } from './pins.ts';
+import { opampPresetNames, opampPresets, type OpampParameters, type OpampPresetName } from './opamp-presets.ts';
+
+/** A supply rail: a fixed voltage, or a node whose voltage the clamp follows. */
+export type Supply = { readonly volts: number } | { readonly node: string };
+
+export interface OpampSpec extends PartSpecBase {
+  readonly kind: 'opamp';
+  readonly preset: OpampPresetName;
+  readonly parameters: OpampParameters;
+  /** Low and high supply; absent only for the `ideal` preset (then the output is unclamped). */
+  readonly supply?: readonly [Supply, Supply];
+}
+
+/**
+ * `opamp: general-purpose` or `opamp: { preset: jfet-input, gbw: 5MHz, ... }`, with
+ * `plus`, `minus`, `out` and `supply: [low, high]` (volts or node names).
+ */
+export const opamp: PartKind<OpampSpec> = {
+  key: 'opamp',
+  summary: 'op-amp macro-model: `opamp: <preset>` or `{ preset, gain, gbw, slew, headroom, rout, offset, bias, second-pole, current-limit }`, `plus`, `minus`, `out`, `supply: [low, high]`',
+  read: (name, main, options) => {
+    const { preset, parameters } = readParameters(main);
+    const pins: PinRef[] = [];
+    for (const pin of ['plus', 'minus', 'out'] as const) {
+      const v = options.need(pin, `write \`${pin}: <node>\``);
+      if (v !== undefined) pins.push(pinRef(pin, v));
+    }
+    const supply = readSupply(options, preset, pins);
+    return { kind: 'opamp', name, preset, parameters, pins, ...(supply ? { supply } : {}) };
+  },
+  create: (spec) => new OpampDevice(spec),
+};
+
+function readParameters(main: ValueReader): { preset: OpampPresetName; parameters: OpampParameters } {
+  if (main.kind() !== 'map') {
+    const preset = readPreset(main);
+    return { preset, parameters: opampPresets[preset] };
+  }
+  const m = main.map();
+  const presetValue = m.need('preset', `name a class: ${opampPresetNames.join(', ')}`);
+  const preset = presetValue ? readPreset(presetValue) : 'general-purpose';
+  const base: OpampParameters = opampPresets[preset];
+  const parameters: OpampParameters = {
+    gain: m.numberOr('gain', quantities.gain, base.gain, { above: 1 }),
+    gbw: m.numberOr('gbw', quantities.frequency, base.gbw, { above: 0 }),
+    slew: m.numberOr('slew', quantities.slewRate, base.slew, { above: 0 }),
+    headroom: readHeadroom(m, base.headroom),
+    rout: m.numberOr('rout', quantities.resistance, base.rout, { min: 0 }),
+    offset: m.numberOr('offset', quantities.voltage, base.offset),
+    bias: m.numberOr('bias', quantities.current, base.bias),
+    ...optional(m, 'second-pole', 'secondPole', quantities.frequency, base.secondPole),
+    ...optional(m, 'current-limit', 'currentLimit', quantities.current, base.currentLimit),
+  };
+  if (parameters.currentLimit !== undefined && parameters.rout === 0) {
+    (m.get('current-limit') ?? m.get('rout') ?? main).fail('a current limit needs an output resistance above 0', 'set `rout:` (tens of ohms is typical) or remove `current-limit`');
+  }
+  m.finish();
+  return { preset, parameters };
+}
+
+function readPreset(value: ValueReader): OpampPresetName {
+  const text = value.kind() === 'scalar' ? value.text() : '';
+  if ((opampPresetNames as string[]).includes(text)) return text as OpampPresetName;
+  value.fail(`'${text}' is not an op-amp class`, `choose one of ${opampPresetNames.join(', ')}`);
+  return 'general-purpose';
+}
+
+function readHeadroom(m: MapReader, fallback: readonly [number, number]): readonly [number, number] {
+  const v = m.get('headroom');
+  if (v === undefined) return fallback;
+  if (v.kind() !== 'list') {
+    const h = v.number(quantities.voltage, { min: 0 });
+    return [h, h];
+  }
+  const items = v.list();
+  if (items.length !== 2) {
+    v.fail('`headroom` is one number or [low, high]', 'write `headroom: 1.5` or `headroom: [1.2, 1.5]`');
+    return fallback;
+  }
+  return [items[0].number(quantities.voltage, { min: 0 }), items[1].number(quantities.voltage, { min: 0 })];
+}
+
+function optional<K extends string>(m: MapReader, key: string, field: K, q: typeof quantities.frequency | typeof quantities.current, fallback: number | undefined): Partial<Record<K, number>> {
+  const v = m.get(key);
+  const value = v !== undefined ? v.number(q, { above: 0 }) : fallback;
+  return value === undefined ? {} : ({ [field]: value } as Record<K, number>);
+}
+
+function readSupply(options: MapReader, preset: OpampPresetName, pins: PinRef[]): readonly [Supply, Supply] | undefined {
+  const v = preset === 'ideal' ? options.get('supply') : options.need('supply', 'write `supply: [-12, 12]` with volts or node names');
+  if (v === undefined) return undefined;
+  const items = v.list();
+  if (items.length !== 2) {
+    v.fail('`supply` needs two entries, [low, high]', 'write `supply: [-12, 12]` or `supply: [vee, vcc]`');
+    return undefined;
+  }
+  const rails = items.map((item, i): Supply => {
+    const text = item.node();
+    const parsed = parseQuantity(text, quantities.voltage);
+    if ('value' in parsed) return { volts: parsed.value };
+    pins.push(pinRef(i === 0 ? 'supply-low' : 'supply-high', item));
+    return { node: text };
+  });
+  const [low, high] = rails;
+  if ('volts' in low && 'volts' in high && !(high.volts > low.volts)) v.fail(`the high supply (${high.volts} V) must be above the low one (${low.volts} V)`, 'write `supply: [low, high]`');
+  return [low, high];
+}
+
+/** Internal capacitance that scales the macro-model's currents; any value gives the same terminal behaviour. */
+const C1 = 1e-9;
+/** The clamp lets the internal node past its limit by at most this much at full slew current. */
+const CLAMP_OVERSHOOT = 1e-3;
+/** Conductance of the second-pole stage; its capacitor sets the pole. */
+const G2 = 1e-3;
+/** Newton may move the input stage's normalized drive by at most this per iteration. */
+const DRIVE_STEP_LIMIT = 4;
+
+/**
+ * The macro-model (DESIGN.md): the differential input plus offset drives a transconductance
+ * stage whose current is limited to ±Imax by a tanh (Imax/C1 is the slew rate) into an
+ * internal node with R1 ∥ C1 to ground (gm·R1 is the open-loop gain, gm/(2π·C1) the
+ * gain-bandwidth). That node is clamped between the supplies less their headroom, so the
+ * amplifier recovers from saturation at its slew rate. An optional unity-gain lag adds a
+ * second pole; a unity buffer then drives the output through rout, optionally with a tanh
+ * current limit. The clamp is piecewise: entering or leaving it is an event.
+ */
+class OpampDevice implements Device {
+  readonly kind = 'opamp';
+  readonly name: string;
+  private p = -1;
+  private m = -1;
+  private out = -1;
+  private low = -1;
+  private high = -1;
+  /** Gain node, second-pole node, drive node, buffer branch current. */
+  private n1 = -1;
+  private n2 = -1;
+  private drive = -1;
+  private k = -1;
+  private readonly gm: number;
+  private readonly r1: number;
+  private readonly imax: number;
+  private readonly gClamp: number;
+  private readonly c1 = new CapacitorCompanion(C1);
+  private readonly c2: CapacitorCompanion | null;
+  /** Normalized input drive at which the last Newton iteration linearized. */
+  private uLast = 0;
+
+  constructor(private readonly spec: OpampSpec) {
+    this.name = spec.name;
+    const q = spec.parameters;
+    this.gm = 2 * Math.PI * q.gbw * C1;
+    this.r1 = q.gain / this.gm;
+    this.imax = q.slew * C1;
+    this.gClamp = Math.max(this.imax / CLAMP_OVERSHOOT, 1e-3);
+    this.c2 = q.secondPole !== undefined ? new CapacitorCompanion(G2 / (2 * Math.PI * q.secondPole)) : null;
+  }
+
+  bind(binder: Binder): void {
+    const pins = this.spec.pins;
+    this.p = binder.node(nodeOf(pins, 'plus'));
+    this.m = binder.node(nodeOf(pins, 'minus'));
+    this.out = binder.node(nodeOf(pins, 'out'));
+    const supply = this.spec.supply;
+    if (supply !== undefined) {
+      if ('node' in supply[0]) this.low = binder.node(supply[0].node);
+      if ('node' in supply[1]) this.high = binder.node(supply[1].node);
+    }
+    this.n1 = binder.internal(`${this.name} gain node`);
+    if (this.c2 !== null) this.n2 = binder.internal(`${this.name} second-pole node`);
+    this.drive = this.spec.parameters.rout > 0 ? binder.internal(`${this.name} drive node`) : this.out;
+    this.k = binder.branch(`${this.name} output current`);
+  }
+
+  stampStatic(m: Mna): void {
+    stampConductance(m, this.n1, -1, 1 / this.r1);
+    const last = this.c2 !== null ? this.n2 : this.n1;
+    if (this.c2 !== null) {
+      m.add(this.n2, this.n2, G2);
+      m.add(this.n2, this.n1, -G2);
+    }
+    // Unity buffer: v(drive) = v(last), its current k leaving `drive`.
+    stampBranchIncidence(m, this.drive, -1, this.k);
+    m.add(this.k, this.drive, 1);
+    m.add(this.k, last, -1);
+    const q = this.spec.parameters;
+    if (q.rout > 0 && q.currentLimit === undefined) stampConductance(m, this.drive, this.out, 1 / q.rout);
+  }
+
+  stampStep(m: Mna, step: StepInfo): void {
+    this.c1.stampStep(m, this.n1, -1, step);
+    this.c2?.stampStep(m, this.n2, -1, step);
+  }
+
+  stampRhs(m: Mna, step: StepInfo): void {
+    this.c1.stampRhs(m, this.n1, -1, step);
+    this.c2?.stampRhs(m, this.n2, -1, step);
+    const bias = this.spec.parameters.bias * step.sourceScale;
+    if (bias !== 0) {
+      stampCurrent(m, this.p, -1, bias);
+      stampCurrent(m, this.m, -1, bias);
+    }
+  }
+
+  stampNewton(m: Mna, x: Float64Array): boolean {
+    const q = this.spec.parameters;
+    // Input stage: i = Imax·tanh(u), u = gm·vd / Imax, linearized at a limited u.
+    const vd = across(x, this.p, this.m) + q.offset;
+    const u = (this.gm * vd) / this.imax;
+    let uLin = u;
+    const sameSaturatedSide = Math.abs(u) > 3 && Math.abs(this.uLast) > 3 && Math.sign(u) === Math.sign(this.uLast);
+    if (!sameSaturatedSide && Math.abs(u - this.uLast) > DRIVE_STEP_LIMIT) uLin = this.uLast + Math.sign(u - this.uLast) * DRIVE_STEP_LIMIT;
+    this.uLast = uLin;
+    const th = Math.tanh(uLin);
+    const i0 = this.imax * th;
+    const g = this.gm * (1 - th * th);
+    const vdLin = (uLin * this.imax) / this.gm;
+    // Current i0 + g·(vp - vm + offset - vdLin) enters n1.
+    m.add(this.n1, this.p, -g);
+    m.add(this.n1, this.m, g);
+    m.rhs(this.n1, i0 + g * (q.offset - vdLin));
+
+    this.stampClamp(m, x);
+    if (q.currentLimit !== undefined) this.stampCurrentLimit(m, x, q.rout, q.currentLimit);
+    return uLin !== u;
+  }
+
+  /** Piecewise clamp of the gain node at the rails less headroom: a stiff conductance beyond them. */
+  private stampClamp(m: Mna, x: Float64Array): void {
+    const region = this.region(x);
+    if (region === 0) return;
+    const [lowRail, highRail] = this.spec.supply!;
+    const rail = region > 0 ? highRail : lowRail;
+    const node = region > 0 ? this.high : this.low;
+    const headroom = this.spec.parameters.headroom[region > 0 ? 1 : 0] * region;
+    // i = gClamp·(v1 - (v(rail) - headroom)) leaves n1.
+    m.add(this.n1, this.n1, this.gClamp);
+    m.add(this.n1, node, -this.gClamp);
+    m.rhs(this.n1, this.gClamp * (('volts' in rail ? rail.volts : 0) - headroom));
+  }
+
+  /** Output current i = Ilim·tanh(v/(rout·Ilim)) from drive to out, linearized. */
+  private stampCurrentLimit(m: Mna, x: Float64Array, rout: number, limit: number): void {
+    const v = across(x, this.drive, this.out);
+    const th = Math.tanh(v / (rout * limit));
+    const g = (1 - th * th) / rout;
+    stampConductance(m, this.drive, this.out, g);
+    stampCurrent(m, this.drive, this.out, limit * th - g * v);
+  }
+
+  region(x: Float64Array): number {
+    const supply = this.spec.supply;
+    if (supply === undefined) return 0;
+    const v1 = x[this.n1];
+    const [hl, hh] = this.spec.parameters.headroom;
+    const high = ('volts' in supply[1] ? supply[1].volts : x[this.high]) - hh;
+    if (v1 > high) return 1;
+    const low = ('volts' in supply[0] ? supply[0].volts : x[this.low]) + hl;
+    return v1 < low ? -1 : 0;
+  }
+
+  accept(x: Float64Array, step: StepInfo): void {
+    this.c1.accept(x[this.n1], step);
+    if (this.c2 !== null) this.c2.accept(x[this.n2], step);
+  }
+
+  links(): readonly Link[] {
+    return [
+      { a: this.n1, b: -1, kind: 'conductive' },
+      { a: this.n2, b: -1, kind: this.n2 >= 0 ? 'conductive' : 'none' },
+      { a: this.drive, b: -1, kind: 'voltage' },
+      { a: this.drive, b: this.out, kind: this.drive === this.out ? 'none' : 'conductive' },
+    ];
+  }
+}

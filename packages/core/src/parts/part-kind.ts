@@ -1,0 +1,31 @@
+import type { MapReader, ReadContext, ValueReader } from '../circuit/reader.ts';
+import type { Device } from './device.ts';
+
+/** A node a part connects to, with where it was written (for messages). */
+export interface PinRef {
+  readonly pin: string;
+  readonly node: string;
+  readonly path: readonly (string | number)[];
+  readonly position?: { line: number; column: number };
+}
+
+/** What every part description carries; each kind adds its own values. */
+export interface PartSpecBase {
+  readonly kind: string;
+  readonly name: string;
+  readonly pins: readonly PinRef[];
+}
+
+/**
+ * A part kind: one YAML key (`resistor`, `capacitor`, ...), how to read it and how to make
+ * its device. In a circuit file a part is a map whose kind key's value is `main` (the value,
+ * preset or wave) and whose sibling keys (`between`, `initial`, ...) are read from `options`.
+ * Adding a part kind is one file plus one line in `parts/index.ts`.
+ */
+export interface PartKind<Spec extends PartSpecBase = PartSpecBase> {
+  readonly key: string;
+  /** One line for docs and "did you mean" lists. */
+  readonly summary: string;
+  read(name: string, main: ValueReader, options: MapReader, context: ReadContext): Spec;
+  create(spec: Spec): Device;
+}

@@ -1,0 +1,29 @@
+import type { MapReader } from '../circuit/reader.ts';
+import type { PinRef } from './part-kind.ts';
+
+/**
+ * Read `between: [a, b]`, the two pins of a two-pin part. For sources `a` is the positive
+ * end; a current source drives its current from `a` through itself into `b`.
+ */
+export function readBetween(options: MapReader): PinRef[] {
+  const value = options.need('between', 'write `between: [a, b]` with the two node names');
+  if (value === undefined) return [];
+  const items = value.list();
+  if (items.length !== 2) {
+    value.fail(`\`between\` needs exactly two node names, found ${items.length}`, 'write `between: [a, b]`');
+    return [];
+  }
+  return items.map((item, i) => pinRef(i === 0 ? 'a' : 'b', item));
+}
+
+/** A named pin read from one value (e.g. an op-amp's `out: vout`). */
+export function pinRef(pin: string, value: { node(): string; path: readonly (string | number)[]; position?: { line: number; column: number } }): PinRef {
+  return { pin, node: value.node(), path: value.path, position: value.position };
+}
+
+/** The node of pin `pin` of a spec, for `bind`. */
+export function nodeOf(pins: readonly PinRef[], pin: string): string {
+  const found = pins.find((p) => p.pin === pin);
+  if (found === undefined) throw new Error(`internal: pin ${pin} missing`);
+  return found.node;
+}

@@ -1,0 +1,44 @@
+import { quantities } from '../units/quantity.ts';
+import { stampConductance } from '../solver/stamps.ts';
+import type { Binder, Device, Link, Mna } from './device.ts';
+import type { PartKind, PartSpecBase } from './part-kind.ts';
+import { nodeOf, readBetween } from './pins.ts';
+
+export interface ResistorSpec extends PartSpecBase {
+  readonly kind: 'resistor';
+  /** Ohms, > 0. */
+  readonly resistance: number;
+}
+
+/** `resistor: 10k, between: [a, b]`. */
+export const resistor: PartKind<ResistorSpec> = {
+  key: 'resistor',
+  summary: 'linear resistor: `resistor: 10k`, `between: [a, b]`',
+  read: (name, main, options) => ({
+    kind: 'resistor',
+    name,
+    resistance: main.number(quantities.resistance, { above: 0 }),
+    pins: readBetween(options),
+  }),
+  create: (spec) => new ResistorDevice(spec),
+};
+
+class ResistorDevice implements Device {
+  readonly kind = 'resistor';
+  readonly name: string;
+  private a = -1;
+  private b = -1;
+  constructor(private readonly spec: ResistorSpec) {
+    this.name = spec.name;
+  }
+  bind(binder: Binder): void {
+    this.a = binder.node(nodeOf(this.spec.pins, 'a'));
+    this.b = binder.node(nodeOf(this.spec.pins, 'b'));
+  }
+  stampStatic(m: Mna): void {
+    stampConductance(m, this.a, this.b, 1 / this.spec.resistance);
+  }
+  links(): readonly Link[] {
+    return [{ a: this.a, b: this.b, kind: 'conductive' }];
+  }
+}

@@ -1,0 +1,56 @@
+import { quantities } from '../units/quantity.ts';
+import { readStimulus } from '../waves/index.ts';
+import type { Wave } from '../waves/wave.ts';
+import { stampBranchIncidence, stampBranchVoltage } from '../solver/stamps.ts';
+import type { Binder, Device, Link, Mna, StepInfo } from './device.ts';
+import type { PartKind, PartSpecBase } from './part-kind.ts';
+import { nodeOf, readBetween } from './pins.ts';
+
+export interface VoltageSourceSpec extends PartSpecBase {
+  readonly kind: 'voltage';
+  /** v(a) - v(b) as a function of time. */
+  readonly wave: Wave;
+}
+
+/** `voltage: 5` or `voltage: { points: [...] }`, `between: [plus, minus]`. */
+export const voltageSource: PartKind<VoltageSourceSpec> = {
+  key: 'voltage',
+  summary: 'independent voltage source: `voltage: 5` or a wave, `between: [plus, minus]`',
+  read: (name, main, options, context) => ({
+    kind: 'voltage',
+    name,
+    wave: readStimulus(main, quantities.voltage, context),
+    pins: readBetween(options),
+  }),
+  create: (spec) => new VoltageSourceDevice(spec),
+};
+
+/** Its branch current flows from `a` through the source into `b`. */
+class VoltageSourceDevice implements Device {
+  readonly kind = 'voltage';
+  readonly name: string;
+  private a = -1;
+  private b = -1;
+  private k = -1;
+  constructor(private readonly spec: VoltageSourceSpec) {
+    this.name = spec.name;
+  }
+  bind(binder: Binder): void {
+    this.a = binder.node(nodeOf(this.spec.pins, 'a'));
+    this.b = binder.node(nodeOf(this.spec.pins, 'b'));
+    this.k = binder.branch(`${this.name} current`);
+  }
+  stampStatic(m: Mna): void {
+    stampBranchIncidence(m, this.a, this.b, this.k);
+    stampBranchVoltage(m, this.k, this.a, this.b);
+  }
+  stampRhs(m: Mna, step: StepInfo): void {
+    m.rhs(this.k, this.spec.wave.value(step.t) * step.sourceScale);
+  }
+  nextCorner(t: number): number {
+    return this.spec.wave.nextCorner(t);
+  }
+  links(): readonly Link[] {
+    return [{ a: this.a, b: this.b, kind: 'voltage' }];
+  }
+}

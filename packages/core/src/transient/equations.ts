@@ -1,0 +1,183 @@
+import type { Device, StepInfo } from '../parts/device.ts';
+import { MnaSystem } from '../solver/mna.ts';
+import { LuSolver } from '../solver/lu.ts';
+import { diagnoseSingular } from '../solver/diagnose.ts';
+import type { Topology } from '../solver/topology.ts';
+import type { RunStats } from './result.ts';
+import { SimulationError } from './simulation-error.ts';
+
+/** Newton limits: iterations per solve, and the convergence test on every unknown. */
+export interface NewtonSettings {
+  maxIterations: number;
+  relative: number;
+  voltage: number;
+  current: number;
+}
+
+/**
+ * The circuit's equations at one step: assembles `G·x = b` from the devices and solves it,
+ * with Newton-Raphson when some device is nonlinear. The matrix is kept in three layers so
+ * that work is done only when something changed: static stamps (once), step stamps (when h
+ * or the method changes) and Newton stamps (per iteration). A factorization is reused for
+ * as long as the assembled matrix is unchanged.
+ */
+export class Equations {
+  readonly size: number;
+  private readonly mna: MnaSystem;
+  private readonly lu: LuSolver;
+  private readonly staticMatrix: Float64Array;
+  private readonly stepMatrix: Float64Array;
+  private readonly factored: Float64Array;
+  private readonly rhsBase: Float64Array;
+  private readonly next: Float64Array;
+  private readonly tolerance: Float64Array;
+  private readonly nonlinear: Device[];
+  private readonly withRhs: Device[];
+  private readonly withStep: Device[];
+  private readonly withAccept: Device[];
+  private readonly withCorners: Device[];
+  private readonly withRegions: Device[];
+  private stepH = NaN;
+  private stepMethod = '';
+  private factorValid = false;
+
+  constructor(
+    readonly devices: readonly Device[],
+    readonly topology: Topology,
+    private readonly newton: NewtonSettings,
+    private readonly stats: RunStats,
+  ) {
+    const n = topology.size;
+    this.size = n;
+    this.mna = new MnaSystem(n);
+    this.lu = new LuSolver(n);
+    this.staticMatrix = new Float64Array(n * n);
+    this.stepMatrix = new Float64Array(n * n);
+    this.factored = new Float64Array(n * n);
+    this.rhsBase = new Float64Array(n);
+    this.next = new Float64Array(n);
+    this.tolerance = Float64Array.from(topology.isCurrent, (c) => (c ? newton.current : newton.voltage));
+    this.nonlinear = devices.filter((d) => d.stampNewton !== undefined);
+    this.withRhs = devices.filter((d) => d.stampRhs !== undefined);
+    this.withStep = devices.filter((d) => d.stampStep !== undefined);
+    this.withAccept = devices.filter((d) => d.accept !== undefined);
+    this.withCorners = devices.filter((d) => d.nextCorner !== undefined);
+    this.withRegions = devices.filter((d) => d.region !== undefined);
+    for (const d of devices) d.stampStatic?.(this.mna);
+    this.staticMatrix.set(this.mna.matrix);
+  }
+
+  get isNonlinear(): boolean {
+    return this.nonlinear.length > 0;
+  }
+
+  /**
+   * Solve for the step's end. `x` holds the starting guess on entry and the solution on
+   * return. Returns false when Newton did not converge (the caller cuts the step); throws
+   * SimulationError when the matrix is singular.
+   */
+  solve(step: StepInfo, x: Float64Array): boolean {
+    const m = this.mna;
+    if (step.h !== this.stepH || step.method !== this.stepMethod) {
+      m.matrix.set(this.staticMatrix);
+      for (const d of this.withStep) d.stampStep!(m, step);
+      this.stepMatrix.set(m.matrix);
+      this.stepH = step.h;
+      this.stepMethod = step.method;
+      this.factorValid = false;
+    }
+    m.b.fill(0);
+    for (const d of this.withRhs) d.stampRhs!(m, step);
+    if (this.nonlinear.length === 0) {
+      if (!this.factorValid) this.factor(this.stepMatrix, step);
+      this.lu.solve(m.b, x);
+      this.stats.solves++;
+      this.stats.newtonIterations++;
+      return allFinite(x);
+    }
+    this.rhsBase.set(m.b);
+    for (let iteration = 1; iteration <= this.newton.maxIterations; iteration++) {
+      m.matrix.set(this.stepMatrix);
+      m.b.set(this.rhsBase);
+      let limited = false;
+      for (const d of this.nonlinear) if (d.stampNewton!(m, x, step)) limited = true;
+      if (!this.factorValid || !sameEntries(m.matrix, this.factored)) this.factor(m.matrix, step);
+      this.lu.solve(m.b, this.next);
+      this.stats.solves++;
+      this.stats.newtonIterations++;
+      if (!allFinite(this.next)) return false;
+      const converged = !limited && this.settled(x, this.next);
+      x.set(this.next);
+      if (converged) return true;
+    }
+    return false;
+  }
+
+  /** Index of the unknown that moved most (relative to its tolerance) in the last iteration. */
+  worstUnknowns(a: Float64Array, b: Float64Array, count: number): string[] {
+    const order = Array.from({ length: this.size }, (_, i) => i).sort(
+      (i, j) => Math.abs(b[j] - a[j]) / this.tolerance[j] - Math.abs(b[i] - a[i]) / this.tolerance[i],
+    );
+    return order.slice(0, count).map((i) => this.topology.labels[i]);
+  }
+
+  /** Update every device's history from the accepted solution. */
+  accept(x: Float64Array, step: StepInfo): void {
+    for (const d of this.withAccept) d.accept!(x, step);
+  }
+
+  /** First stimulus corner strictly after `t`. */
+  nextCorner(t: number): number {
+    let c = Infinity;
+    for (const d of this.withCorners) {
+      const dc = d.nextCorner!(t);
+      if (dc < c) c = dc;
+    }
+    return c;
+  }
+
+  /** True when some piecewise device lies in a different piece at `a` than at `b`. */
+  regionChanged(a: Float64Array, b: Float64Array): boolean {
+    for (const d of this.withRegions) if (d.region!(a) !== d.region!(b)) return true;
+    return false;
+  }
+
+  /** Unknowns whose truncation error the step control watches. */
+  watchedUnknowns(): Int32Array {
+    const watched = new Set<number>();
+    for (let i = 0; i < this.size; i++) if (!this.topology.isCurrent[i]) watched.add(i);
+    for (const d of this.devices) for (const k of d.stateUnknowns?.() ?? []) watched.add(k);
+    return Int32Array.from([...watched].sort((a, b) => a - b));
+  }
+
+  private settled(previous: Float64Array, next: Float64Array): boolean {
+    const rel = this.newton.relative;
+    for (let i = 0; i < this.size; i++) {
+      const limit = rel * Math.max(Math.abs(previous[i]), Math.abs(next[i])) + this.tolerance[i];
+      if (!(Math.abs(next[i] - previous[i]) <= limit)) return false;
+    }
+    return true;
+  }
+
+  private factor(matrix: Float64Array, step: StepInfo): void {
+    const singular = this.lu.factor(matrix);
+    this.stats.factorizations++;
+    if (singular >= 0) {
+      const cause = diagnoseSingular(this.devices, this.topology, singular);
+      const when = step.method === 'dc' ? 'at the operating point' : `at t = ${step.t} s`;
+      throw new SimulationError(`${cause.message} (${when})`, step.method === 'dc' ? NaN : step.t, cause.nodes, cause.hint, cause.parts);
+    }
+    this.factored.set(matrix);
+    this.factorValid = true;
+  }
+}
+
+function sameEntries(a: Float64Array, b: Float64Array): boolean {
+  for (let i = 0; i < a.length; i++) if (a[i] !== b[i]) return false;
+  return true;
+}
+
+function allFinite(x: Float64Array): boolean {
+  for (let i = 0; i < x.length; i++) if (!Number.isFinite(x[i])) return false;
+  return true;
+}

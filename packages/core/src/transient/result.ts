@@ -1,0 +1,46 @@
+import type { StepObserver } from './observer.ts';
+
+/** Work counters, kept for every run (as a mature ODE suite keeps them). */
+export interface RunStats {
+  acceptedSteps: number;
+  rejectedSteps: number;
+  /** LU factorizations performed (a linear circuit at a constant step reuses one). */
+  factorizations: number;
+  /** Linear solves (forward and back substitution). */
+  solves: number;
+  /** Newton iterations summed over all steps (1 per step for a linear circuit). */
+  newtonIterations: number;
+  /** Steps rejected because Newton did not converge. */
+  newtonFailures: number;
+  /** Backward-Euler steps taken to damp after corners. */
+  dampingSteps: number;
+  /** Smallest and largest accepted step, seconds. */
+  minStep: number;
+  maxStep: number;
+}
+
+/** Output of a transient run: one Float64Array column per probe on the output grid. */
+export interface TransientResult {
+  readonly time: Float64Array;
+  /** Column per probe name, same length as `time`. */
+  readonly columns: ReadonlyMap<string, Float64Array>;
+  readonly probes: readonly string[];
+  readonly stats: RunStats;
+  /** The DC operating point: voltage of every named node at t = 0. */
+  readonly operatingPoint: ReadonlyMap<string, number>;
+}
+
+/** Options for `simulate`. */
+export interface SimulateOptions {
+  /** Watchers inside the step loop (ADC samplers, saturation trackers). */
+  observers?: readonly StepObserver[];
+  /**
+   * Called once per output row with the row's time and probe values (in `probes` order).
+   * The array is reused between calls: copy it to keep it.
+   */
+  onRow?: (time: number, values: Float64Array) => void;
+  /** Called now and then (about every 1% of simulated time) with the fraction done, 0..1. */
+  onProgress?: (fraction: number) => void;
+  /** When false, columns are not kept (use `onRow` to stream long runs). Default true. */
+  keepColumns?: boolean;
+}

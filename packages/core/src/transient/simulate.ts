@@ -1,0 +1,209 @@
+import type { Circuit } from '../circuit/circuit.ts';
+import type { StepInfo } from '../parts/device.ts';
+import { partKind } from '../parts/index.ts';
+import { Topology } from '../solver/topology.ts';
+import { Equations } from './equations.ts';
+import { solveOperatingPoint } from './operating-point.ts';
+import { OutputGrid } from './output-grid.ts';
+import type { RunStats, SimulateOptions, TransientResult } from './result.ts';
+import { SimulationError } from './simulation-error.ts';
+import { TruncationError } from './truncation-error.ts';
+
+/** Fraction of the step before a corner used for the first (backward-Euler) step after it. */
+const FIRST_STEP_FRACTION = 1e-3;
+/** Largest growth of the step from one step to the next. */
+const MAX_GROWTH = 2;
+/** Growth below this keeps the step unchanged, so that its factorization is reused. */
+const KEEP_BELOW = 1.2;
+/** Safety factor on the step the error estimate proposes. */
+const SAFETY = 0.9;
+/** Newton iterations before a step is cut. */
+const NEWTON_ITERATIONS = 40;
+
+/**
+ * Transient analysis: operating point at t = 0, then trapezoidal steps with error control.
+ * Every stimulus corner and output row is a landing point that a step ends on exactly;
+ * after each corner (and at t = 0) two backward-Euler steps damp the trapezoidal rule's
+ * own two-step oscillation before trapezoidal steps resume.
+ */
+export function simulate(circuit: Circuit, options: SimulateOptions = {}): TransientResult {
+  const settings = circuit.simulate;
+  const stats: RunStats = {
+    acceptedSteps: 0,
+    rejectedSteps: 0,
+    factorizations: 0,
+    solves: 0,
+    newtonIterations: 0,
+    newtonFailures: 0,
+    dampingSteps: 0,
+    minStep: Infinity,
+    maxStep: 0,
+  };
+  const devices = circuit.parts.map((spec) => partKind(spec.kind).create(spec));
+  const topology = new Topology(circuit.nodes);
+  for (const device of devices) device.bind(topology);
+  const equations = new Equations(
+    devices,
+    topology,
+    {
+      maxIterations: NEWTON_ITERATIONS,
+      relative: settings.relativeTolerance * 1e-2,
+      voltage: settings.voltageTolerance,
+      current: settings.currentTolerance,
+    },
+    stats,
+  );
+  const n = equations.size;
+  const duration = settings.duration;
+  const fixed = settings.fixedStep;
+  const maxStep = Math.min(settings.maxStep, duration);
+  /** Times closer than this are the same instant. */
+  const eps = duration * 1e-12;
+  const floor = Math.max(duration * 1e-14, 1e-18);
+
+  const x = new Float64Array(n);
+  const trial = new Float64Array(n);
+  const step: StepInfo = { t: 0, h: 0, method: 'dc', sourceScale: 1 };
+  solveOperatingPoint(equations, x, step);
+  equations.accept(x, step);
+  const operatingPoint = new Map(topology.labels.slice(0, topology.nodeCount).map((name, i) => [name, x[i]] as const));
+
+  const absolute = Float64Array.from(topology.isCurrent, (c) => (c ? settings.currentTolerance : settings.voltageTolerance));
+  const error = new TruncationError(n, equations.watchedUnknowns(), settings.relativeTolerance, absolute);
+  error.restart(0, x);
+
+  const observers = options.observers ?? [];
+  const observerContext = {
+    node: (name: string): number => {
+      if (name !== 'gnd' && !topology.labels.slice(0, topology.nodeCount).includes(name)) throw new Error(`no node named ${name}`);
+      return topology.node(name);
+    },
+    devices,
+    labels: topology.labels,
+  };
+  for (const o of observers) o.bind(observerContext);
+  const instants = observers.filter((o) => o.nextInstant !== undefined);
+  const nextInstant = (after: number): number => {
+    let next = Infinity;
+    for (const o of instants) next = Math.min(next, o.nextInstant!(after));
+    return next;
+  };
+  for (const o of observers) o.accepted(0, x);
+
+  const grid = new OutputGrid(settings.outputStep, duration);
+  const probeIndex = Int32Array.from(circuit.probes, (p) => topology.node(p));
+  const keep = options.keepColumns !== false;
+  const time = new Float64Array(keep ? grid.rows : 0);
+  const columns = circuit.probes.map(() => new Float64Array(keep ? grid.rows : 0));
+  const rowValues = new Float64Array(probeIndex.length);
+  const record = (row: number): void => {
+    const t = grid.time(row);
+    for (let p = 0; p < probeIndex.length; p++) rowValues[p] = probeIndex[p] >= 0 ? x[probeIndex[p]] : 0;
+    if (keep) {
+      time[row] = t;
+      for (let p = 0; p < probeIndex.length; p++) columns[p][row] = rowValues[p];
+    }
+    options.onRow?.(t, rowValues);
+  };
+  record(0);
+
+  let t = 0;
+  let row = 1;
+  let corner = equations.nextCorner(eps);
+  let instant = nextInstant(eps);
+  let sinceCorner = 0;
+  let natural = fixed ?? Math.min(maxStep, settings.outputStep);
+  let lastH = NaN;
+  let nextProgress = 0.01;
+  const worst = { index: 0 };
+  /** Step imposed while narrowing onto an event; Infinity when none. */
+  let cut = Infinity;
+  /** Events are located to within this time. */
+  const eventResolution = Math.max(Math.min(settings.outputStep, maxStep) * 1e-3, floor);
+
+  while (t < duration - eps) {
+    const target = Math.min(corner, instant, grid.time(row), duration);
+    let h = cut < Infinity ? cut : fixed !== undefined ? Math.min(natural, fixed) : sinceCorner === 0 ? Math.min(natural, corner - t) * FIRST_STEP_FRACTION : natural;
+    h = Math.min(h, maxStep);
+    let landing = false;
+    if (t + h >= target - eps) {
+      h = target - t;
+      landing = true;
+    } else if (fixed === undefined && t + 1.5 * h > target) {
+      h = (target - t) / 2;
+    }
+    // Keep the previous step exactly when this one differs only by rounding: same matrix.
+    if (Math.abs(h - lastH) <= eps) h = lastH;
+    step.t = landing ? target : t + h;
+    step.h = h;
+    step.method = sinceCorner < 2 ? 'be' : 'trap';
+    trial.set(x);
+
+    if (!equations.solve(step, trial)) {
+      stats.newtonFailures++;
+      stats.rejectedSteps++;
+      natural = h / 8;
+      if (natural < floor) throw stuck(t, equations.worstUnknowns(x, trial, 3), 'Newton iterations did not converge');
+      continue;
+    }
+    // A device changed piece (an amplifier reached a rail): bisect the step onto the change.
+    const event = equations.regionChanged(x, trial);
+    if (event && h > eventResolution) {
+      stats.rejectedSteps++;
+      cut = h / 2;
+      continue;
+    }
+    if (fixed === undefined) {
+      const order = step.method === 'be' ? 1 : 2;
+      const ratio = error.ratio(step.t, trial, order, worst);
+      const proposal = ratio === 0 ? h * MAX_GROWTH : h * Math.min(MAX_GROWTH, SAFETY * Math.pow(ratio, -1 / (order + 1)));
+      if (ratio > 1) {
+        stats.rejectedSteps++;
+        natural = Math.max(proposal, h * 0.1);
+        if (natural < floor) throw stuck(t, [topology.labels[worst.index]], 'the local truncation error stayed above tolerance');
+        continue;
+      }
+      if (cut === Infinity && (!landing || proposal < natural)) natural = proposal >= h && proposal < h * KEEP_BELOW ? h : proposal;
+    } else {
+      natural = fixed;
+    }
+
+    equations.accept(trial, step);
+    x.set(trial);
+    t = step.t;
+    lastH = h;
+    stats.acceptedSteps++;
+    if (step.method === 'be') stats.dampingSteps++;
+    if (h < stats.minStep) stats.minStep = h;
+    if (h > stats.maxStep) stats.maxStep = h;
+    sinceCorner++;
+    // While narrowing, the event lies in the rest of the bisected interval: halve again.
+    cut = cut < Infinity && !event && h / 2 > eventResolution ? h / 2 : Infinity;
+    if (event || t >= corner - eps) {
+      error.restart(t, x);
+      sinceCorner = 0;
+      if (t >= corner - eps) corner = equations.nextCorner(t + eps);
+    } else {
+      error.push(t, x);
+    }
+    for (const o of observers) o.accepted(t, x);
+    if (t >= instant - eps) instant = nextInstant(t + eps);
+    while (row < grid.rows && grid.time(row) <= t + eps) record(row++);
+    if (options.onProgress && t >= nextProgress * duration) {
+      options.onProgress(t / duration);
+      nextProgress = Math.floor((t / duration) * 100 + 1) / 100;
+    }
+  }
+
+  const columnMap = new Map(circuit.probes.map((p, i) => [p, columns[i]] as const));
+  return { time, columns: columnMap, probes: circuit.probes, stats, operatingPoint };
+}
+
+function stuck(t: number, nodes: string[], why: string): SimulationError {
+  return new SimulationError(
+    `the step size fell below the floor at t = ${t} s: ${why} at ${nodes.join(', ')}`,
+    t,
+    nodes,
+    'look for an edge much faster than the circuit around it, a missing resistance in a loop, or loosen `relative-tolerance`',
+  );
+}

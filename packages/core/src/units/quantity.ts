@@ -1,0 +1,32 @@
+/**
+ * A physical quantity a circuit value may carry: its accepted unit symbols (after the SI
+ * prefix) and any special notation. A plain number is always accepted in base units.
+ */
+export interface Quantity {
+  /** Word used in error messages, e.g. "resistance". */
+  readonly name: string;
+  /** Unit symbols accepted after the prefix; the first one is used when formatting. */
+  readonly units: readonly string[];
+  /** Accept `dB` (voltage ratio, 20·log10) as well: `100dB` is 1e5. */
+  readonly decibels?: boolean;
+  /** Accept `%`: `1%` is 0.01. */
+  readonly percent?: boolean;
+  /** A rate per time: the denominator takes its own prefix, `13V/us` is 13e6 V/s. */
+  readonly perTime?: boolean;
+}
+
+export const quantities = {
+  resistance: { name: 'resistance', units: ['Ω', 'ohm', 'Ohm', 'R'] },
+  capacitance: { name: 'capacitance', units: ['F'] },
+  inductance: { name: 'inductance', units: ['H'] },
+  voltage: { name: 'voltage', units: ['V'] },
+  current: { name: 'current', units: ['A'] },
+  frequency: { name: 'frequency', units: ['Hz'] },
+  time: { name: 'time', units: ['s'] },
+  slewRate: { name: 'slew rate', units: ['V/s'], perTime: true },
+  gain: { name: 'gain', units: ['V/V'], decibels: true },
+  fraction: { name: 'fraction', units: [], percent: true },
+  angle: { name: 'angle', units: ['°', 'deg'] },
+  /** A pure number (counts, bits); no unit, SI prefixes still allowed. */
+  count: { name: 'number', units: [] },
+} as const satisfies Record<string, Quantity>;

@@ -1,0 +1,125 @@
+import type { MapReader, ValueReader } from '../circuit/reader.ts';
+import { quantities } from '../units/quantity.ts';
+import { formatSI } from '../units/format.ts';
+import type { Wave, WaveKind } from './wave.ts';
+import { nextPeriodicCorner, timeInPeriod } from './periodic.ts';
+
+/**
+ * Straight lines between given points; the first value holds before the first point and the
+ * last value after the last point. With a repeat period the pattern (including that hold)
+ * restarts at every multiple of the period, jumping back to the first value.
+ */
+export class PiecewiseLinearWave implements Wave {
+  /** Corner offsets within one period: 0 and every point time below the period. */
+  private readonly periodCorners: Float64Array;
+
+  constructor(
+    private readonly times: Float64Array,
+    private readonly values: Float64Array,
+    /** Infinity when the pattern does not repeat. */
+    private readonly period: number,
+  ) {
+    const inside = Array.from(times).filter((t) => t > 0 && t < period);
+    this.periodCorners = Float64Array.from([0, ...inside]);
+  }
+
+  value(t: number): number {
+    const u = this.period < Infinity && t >= 0 ? timeInPeriod(t, 0, this.period) : t;
+    const times = this.times;
+    const last = times.length - 1;
+    if (!(u > times[0])) return this.values[0];
+    if (u >= times[last]) return this.values[last];
+    // Binary search for the segment times[lo] <= u < times[lo + 1].
+    let lo = 0;
+    let hi = last;
+    while (hi - lo > 1) {
+      const mid = (lo + hi) >> 1;
+      if (times[mid] <= u) lo = mid;
+      else hi = mid;
+    }
+    const v0 = this.values[lo];
+    return v0 + ((this.values[lo + 1] - v0) * (u - times[lo])) / (times[lo + 1] - times[lo]);
+  }
+
+  nextCorner(t: number): number {
+    if (this.period < Infinity) return nextPeriodicCorner(t, 0, this.period, this.periodCorners);
+    const times = this.times;
+    if (!(t < times[times.length - 1])) return Infinity;
+    let lo = 0;
+    let hi = times.length - 1;
+    // First index with times[i] > t.
+    while (lo < hi) {
+      const mid = (lo + hi) >> 1;
+      if (times[mid] > t) hi = mid;
+      else lo = mid + 1;
+    }
+    return times[lo];
+  }
+}
+
+/**
+ * Check the times of a point list: the first at or after 0, each strictly after the one before.
+ * `report(i, message, hint)` names point i (0-based). NaN times were reported when read.
+ */
+export function checkTimes(times: readonly number[], report: (index: number, message: string, hint: string) => void): void {
+  if (times[0] < 0) report(0, `point 1 has a negative time, ${formatSI(times[0], 's')}`, 'time starts at 0: write the first point at 0 or later');
+  for (let i = 1; i < times.length; i++) {
+    if (times[i] > times[i - 1] || Number.isNaN(times[i]) || Number.isNaN(times[i - 1])) continue;
+    report(
+      i,
+      `time of point ${i + 1} (${formatSI(times[i], 's')}) is not after the time of point ${i} (${formatSI(times[i - 1], 's')})`,
+      'times must increase strictly; for a jump, put the two points a short time apart',
+    );
+  }
+}
+
+/** The optional `repeat:` period next to a point list; Infinity when absent or invalid. */
+export function readRepeat(options: MapReader, lastTime: number): number {
+  const value = options.get('repeat');
+  if (value === undefined) return Infinity;
+  const period = value.number(quantities.time, { above: 0 });
+  if (period < lastTime) {
+    value.fail(
+      `repeat period ${formatSI(period, 's')} is shorter than the last point's time ${formatSI(lastTime, 's')}`,
+      'the period must be at least the time of the last point',
+    );
+  }
+  return period >= lastTime ? period : Infinity;
+}
+
+/** `points: [[0, 0], [1m, 5], [2m, 5]]`, optional `repeat: 4m`. */
+export const points: WaveKind = {
+  key: 'points',
+  summary: 'straight lines through [time, value] points; optional `repeat: period`',
+  read(main: ValueReader, options: MapReader, _context, quantity): Wave {
+    const items = main.list();
+    if (items.length === 0 && main.kind() === 'list') main.fail('a point list needs at least one point', 'write points: [[0, 0], [1m, 5]]');
+    const times: number[] = [];
+    const values: number[] = [];
+    const timeReaders: ValueReader[] = [];
+    items.forEach((item, i) => {
+      const pair = item.list();
+      if (pair.length === 2) {
+        times.push(pair[0].number(quantities.time));
+        values.push(pair[1].number(quantity));
+        timeReaders.push(pair[0]);
+        return;
+      }
+      if (item.kind() === 'list') item.fail(`point ${i + 1} needs two numbers, [time, value], found ${pair.length}`, 'write each point as [time, value], e.g. [1m, 5]');
+      // Keep the numbering of later points; NaN times are skipped by the checks.
+      times.push(NaN);
+      values.push(NaN);
+      timeReaders.push(item);
+    });
+    checkTimes(times, (i, message, hint) => timeReaders[i].fail(message, hint));
+    const period = readRepeat(options, times.length > 0 ? times[times.length - 1] : 0);
+    return pointsWave(times, values, period);
+  },
+};
+
+/** A piecewise-linear wave of the checked points (a zero wave stands in when there are none). */
+export function pointsWave(times: readonly number[], values: readonly number[], period: number): Wave {
+  return times.length === 0
+    ? new PiecewiseLinearWave(Float64Array.of(0), Float64Array.of(0), Infinity)
+    : new PiecewiseLinearWave(Float64Array.from(times), Float64Array.from(values), period);
+}

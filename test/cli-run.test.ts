@@ -1,0 +1,81 @@
+import { existsSync, mkdirSync, mkdtempSync, readFileSync, readdirSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { afterEach, beforeEach, describe, expect, test } from 'vitest';
+import { repoRoot, runCli } from './support/run-cli.ts';
+
+// End-to-end runs of the fixtures through the real engine. Durations and steps below are
+// those written in the fixture files (checked here independently of the CLI's own report).
+const fixtures = [
+  { file: 'demo-strain-front-end.yaml', probes: ['beam', 'filt', 'adc'], duration: 24e-3, outputStep: 10e-6 },
+  { file: 'supply-ringing.yaml', probes: ['feed', 'rail'], duration: 500e-6, outputStep: 500e-9 },
+  { file: 'sensor-cable-rl.yaml', probes: ['drive', 'probe'], duration: 100e-6, outputStep: 100e-9 },
+];
+
+let scratch: string;
+beforeEach(() => {
+  scratch = mkdtempSync(join(tmpdir(), 'voltcast-run-'));
+});
+afterEach(() => {
+  rmSync(scratch, { recursive: true, force: true });
+});
+
+describe.each(fixtures)('voltcast run fixtures/$file', ({ file, probes, duration, outputStep }) => {
+  test('writes waveforms.csv on the output grid and report.json with the run counters', async () => {
+    const out = join(scratch, 'result');
+    const { code, stdout, stderr } = await runCli(['run', join(repoRoot, 'fixtures', file), '--out', out]);
+    expect(stderr).toBe('');
+    expect(code).toBe(0);
+    expect(readdirSync(out).sort()).toEqual(['report.json', 'report.txt', 'waveforms.csv']);
+    expect(readdirSync(scratch)).toEqual(['result']); // the staging folder is gone
+
+    const lines = readFileSync(join(out, 'waveforms.csv'), 'utf8').trimEnd().split('\n');
+    expect(lines[0]).toBe(['time', ...probes].join(','));
+    const rows = lines.slice(1).map((line) => line.split(',').map(Number));
+    expect(rows.length).toBe(Math.round(duration / outputStep) + 1);
+    for (const row of rows) {
+      expect(row.length).toBe(probes.length + 1);
+      for (const value of row) expect(Number.isFinite(value)).toBe(true);
+    }
+    expect(rows[0][0]).toBe(0);
+    expect(rows.at(-1)![0]).toBeCloseTo(duration, 15);
+    // Row times sit on the grid k·output-step (to the 9 significant digits written).
+    rows.forEach((row, k) => expect(Math.abs(row[0] - k * outputStep)).toBeLessThanOrEqual(1e-8 * duration));
+
+    const report = JSON.parse(readFileSync(join(out, 'report.json'), 'utf8'));
+    expect(report.file).toContain(file);
+    expect(report.settings.duration).toBeCloseTo(duration, 15);
+    expect(report.stats.acceptedSteps).toBeGreaterThanOrEqual(rows.length - 1);
+    expect(report.stats.factorizations).toBeGreaterThan(0);
+    expect(Object.keys(report.probes)).toEqual(probes);
+    // The per-probe extremes agree with the CSV they summarise.
+    probes.forEach((probe, i) => {
+      const column = rows.map((row) => row[i + 1]);
+      expect(report.probes[probe].min).toBeCloseTo(Math.min(...column), 6);
+      expect(report.probes[probe].max).toBeCloseTo(Math.max(...column), 6);
+      expect(report.probes[probe].final).toBeCloseTo(column.at(-1)!, 6);
+    });
+
+    expect(readFileSync(join(out, 'report.txt'), 'utf8')).toContain(report.circuit);
+    expect(stdout).toContain(report.circuit);
+    expect(stdout).toContain(join(out, 'waveforms.csv'));
+  });
+});
+
+describe('output folder', () => {
+  test('a successful run replaces the folder of an earlier run as a whole', async () => {
+    const out = join(scratch, 'result');
+    mkdirSync(out);
+    writeFileSync(join(out, 'stale.txt'), 'from an earlier run');
+    const { code } = await runCli(['run', join(repoRoot, 'fixtures/supply-ringing.yaml'), '--out', out, '--quiet']);
+    expect(code).toBe(0);
+    expect(readdirSync(out).sort()).toEqual(['report.json', 'report.txt', 'waveforms.csv']);
+  });
+
+  test('without --out the run writes to out/<file base name> under the current folder', async () => {
+    const { code, stdout } = await runCli(['run', join(repoRoot, 'fixtures/supply-ringing.yaml'), '--quiet'], scratch);
+    expect(code).toBe(0);
+    expect(stdout).toBe(''); // --quiet
+    expect(existsSync(join(scratch, 'out/supply-ringing/waveforms.csv'))).toBe(true);
+  });
+});
