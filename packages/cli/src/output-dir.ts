@@ -1,4 +1,5 @@
-import { existsSync, mkdirSync, mkdtempSync, readdirSync, renameSync, rmSync, rmdirSync } from 'node:fs';
+import { randomBytes } from 'node:crypto';
+import { existsSync, mkdirSync, readdirSync, renameSync, rmSync, rmdirSync } from 'node:fs';
 import { basename, dirname, join, resolve } from 'node:path';
 
 /**
@@ -21,7 +22,9 @@ export function writeOutputDir<T>(finalDir: string, write: (stagingDir: string) 
   const createdParent = mkdirSync(parent, { recursive: true });
   const prefix = `.${basename(target)}.partial-`;
   removeInterruptedRuns(parent, prefix);
-  const staging = mkdtempSync(join(parent, prefix));
+  // Not mkdtemp: its folders are private (mode 0700); outputs get the user's usual mode.
+  const staging = join(parent, prefix + randomBytes(6).toString('hex'));
+  mkdirSync(staging);
   try {
     const value = write(staging);
     putInPlace(staging, target);

@@ -23,17 +23,20 @@ export class RunProgress {
   /** `fraction` of simulated time done, 0..1 (the engine's onProgress). */
   update(fraction: number): void {
     if (!this.#enabled) return;
+    const simulated = formatSI(fraction * this.#duration, 's');
     if (this.#bar === undefined) {
       if (performance.now() - this.#startedAt < showAfterMs) return;
       this.#bar = new cliProgress.SingleBar({
         stream: process.stderr,
-        format: 'simulating {bar} {percentage}% | t = {simulated} of {total}',
+        // `total` and `value` are the bar's own tokens; the payload uses other names.
+        format: 'simulating {bar} {percentage}% | t = {simulated} of {end}',
         clearOnComplete: true,
         hideCursor: false,
       });
-      this.#bar.start(1, fraction, { simulated: '', total: formatSI(this.#duration, 's') });
+      this.#bar.start(1, fraction, { simulated, end: formatSI(this.#duration, 's') });
+    } else {
+      this.#bar.update(fraction, { simulated });
     }
-    this.#bar.update(fraction, { simulated: formatSI(fraction * this.#duration, 's') });
   }
 
   /** Remove the bar (if shown) so the summary starts on a clean line. */

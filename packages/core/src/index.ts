@@ -17,11 +17,18 @@ export { quantities } from './units/quantity.ts';
 export type { Quantity } from './units/quantity.ts';
 
 export { partKinds, partKind } from './parts/index.ts';
+export { isOpamp } from './parts/opamp.ts';
+export type { OpampSpec, OpampStatus, Supply } from './parts/opamp.ts';
+export { opampPresets, opampPresetNames } from './parts/opamp-presets.ts';
+export type { OpampParameters, OpampPresetName } from './parts/opamp-presets.ts';
+export type { StepObserver, ObserverContext } from './transient/observer.ts';
 export type { Device, Binder, Mna, StepInfo, Method, Link, PartKind, PartSpecBase, PinRef } from './parts/index.ts';
 
 export { waveKinds, readStimulus } from './waves/index.ts';
 export type { Wave, WaveKind } from './waves/wave.ts';
 
 export { simulate } from './transient/simulate.ts';
+export { runCircuit } from './analysis/index.ts';
+export type { CircuitRun, RunOptions } from './analysis/index.ts';
 export type { TransientResult, RunStats, SimulateOptions } from './transient/result.ts';
 export { SimulationError } from './transient/simulation-error.ts';

@@ -114,6 +114,27 @@ function readSupply(options: MapReader, preset: OpampPresetName, pins: PinRef[])
   return [low, high];
 }
 
+/** What an amplifier is doing at one solution, for saturation reports. */
+export interface OpampStatus {
+  /** -1 at the low clamp, 1 at the high clamp, 0 in between. */
+  readonly rail: -1 | 0 | 1;
+  /** The input stage delivers over 90% of its current limit: the output moves at the slew rate. */
+  readonly slewing: boolean;
+  /** The output current is over 90% of `current-limit`. */
+  readonly currentLimited: boolean;
+  /** v(plus) - v(minus) + offset: how hard the loop is pushing, volts. */
+  readonly inputError: number;
+  /** Output pin voltage. */
+  readonly output: number;
+  /** Output clamp levels (supply less headroom) at this solution; ±Infinity without supplies. */
+  readonly limits: readonly [low: number, high: number];
+}
+
+/** True for op-amp devices, which report their status. */
+export function isOpamp(device: Device): device is Device & { status(x: Float64Array): OpampStatus; readonly spec: OpampSpec } {
+  return device.kind === 'opamp';
+}
+
 /** Internal capacitance that scales the macro-model's currents; any value gives the same terminal behaviour. */
 const C1 = 1e-9;
 /** The clamp lets the internal node past its limit by at most this much at full slew current. */
@@ -154,7 +175,7 @@ class OpampDevice implements Device {
   /** Normalized input drive at which the last Newton iteration linearized. */
   private uLast = 0;
 
-  constructor(private readonly spec: OpampSpec) {
+  constructor(readonly spec: OpampSpec) {
     this.name = spec.name;
     const q = spec.parameters;
     this.gm = 2 * Math.PI * q.gbw * C1;
@@ -260,11 +281,31 @@ class OpampDevice implements Device {
     const supply = this.spec.supply;
     if (supply === undefined) return 0;
     const v1 = x[this.n1];
-    const [hl, hh] = this.spec.parameters.headroom;
-    const high = ('volts' in supply[1] ? supply[1].volts : x[this.high]) - hh;
-    if (v1 > high) return 1;
-    const low = ('volts' in supply[0] ? supply[0].volts : x[this.low]) + hl;
-    return v1 < low ? -1 : 0;
+    if (v1 > this.limit(x, 1)) return 1;
+    return v1 < this.limit(x, -1) ? -1 : 0;
+  }
+
+  /** Clamp level on the high (1) or low (-1) side at solution x. */
+  private limit(x: Float64Array, side: 1 | -1): number {
+    const supply = this.spec.supply;
+    if (supply === undefined) return side * Infinity;
+    const rail = supply[side > 0 ? 1 : 0];
+    const volts = 'volts' in rail ? rail.volts : x[side > 0 ? this.high : this.low];
+    return volts - side * this.spec.parameters.headroom[side > 0 ? 1 : 0];
+  }
+
+  status(x: Float64Array): OpampStatus {
+    const q = this.spec.parameters;
+    const inputError = across(x, this.p, this.m) + q.offset;
+    const outputCurrent = q.currentLimit !== undefined ? Math.abs(Math.tanh(across(x, this.drive, this.out) / (q.rout * q.currentLimit))) : 0;
+    return {
+      rail: this.region(x) as -1 | 0 | 1,
+      slewing: Math.abs(Math.tanh((this.gm * inputError) / this.imax)) > 0.9,
+      currentLimited: outputCurrent > 0.9,
+      inputError,
+      output: this.out >= 0 ? x[this.out] : 0,
+      limits: [this.limit(x, -1), this.limit(x, 1)],
+    };
   }
 
   accept(x: Float64Array, step: StepInfo): void {

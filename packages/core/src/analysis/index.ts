@@ -1,0 +1,2 @@
+export { runCircuit } from './run-circuit.ts';
+export type { CircuitRun, RunOptions } from './run-circuit.ts';
