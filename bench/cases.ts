@@ -33,3 +33,17 @@ export function rcLadder(sections: number, steps: number, step: number): string 
   lines.push(`probes: [n${sections}]`);
   return lines.join('\n');
 }
+
+/** The plain differentiator driven by a square wave into its rails, for `periods` periods. */
+export function differentiatorIntoRails(periods: number): string {
+  return `
+circuit: bench-differentiator-rails
+parts:
+  SQ: { voltage: { square: { low: -1, high: 1, frequency: 1k } }, between: [in, gnd] }
+  CIN: { capacitor: 10n, between: [in, sum] }
+  RF: { resistor: 10k, between: [sum, out] }
+  AMP: { opamp: general-purpose, plus: gnd, minus: sum, out: out, supply: [-12, 12] }
+simulate: { duration: ${periods}m, output-step: 1u }
+probes: [out]
+`;
+}

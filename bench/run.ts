@@ -1,7 +1,7 @@
 // `pnpm bench`: accepted steps per second and total seconds per case. Speed is shown here,
 // never asserted by a timed test.
 import { parseCircuit, simulate } from '@voltcast/core';
-import { linearNetwork, rcLadder } from './cases.ts';
+import { differentiatorIntoRails, linearNetwork, rcLadder } from './cases.ts';
 
 interface Case {
   name: string;
@@ -11,6 +11,7 @@ interface Case {
 const cases: Case[] = [
   { name: 'linear network, 6 nodes, 1,000,000 fixed steps', text: linearNetwork(1_000_000, 1e-7) },
   ...[10, 100, 1000].map((n) => ({ name: `RC ladder, ${n} sections, 10,000 fixed steps`, text: rcLadder(n, 10_000, 1e-7) })),
+  { name: 'op-amp differentiator into its rails, 60 periods', text: differentiatorIntoRails(60) },
 ];
 
 const only = process.argv[2];

@@ -32,3 +32,11 @@ export { runCircuit } from './analysis/index.ts';
 export type { CircuitRun, RunOptions } from './analysis/index.ts';
 export type { TransientResult, RunStats, SimulateOptions } from './transient/result.ts';
 export { SimulationError } from './transient/simulation-error.ts';
+export { AdcSampler, Transfer, SeededNoise, SampleSchedule, encode as encodeAdcCode, codeLimits as adcCodeLimits } from './analysis/adc/index.ts';
+export type { AdcSpec, AdcCoding, AdcRounding, SampleTimes, SamplingSpec, AdcReadout, AdcReport, ClippedSamples, CodeError, TimeInterval } from './analysis/adc/index.ts';
+export { timedSwitch } from './parts/switch.ts';
+export type { SwitchSpec, SwitchSchedule } from './parts/switch.ts';
+
+export { envelope, envelopePlan, planVariants, runVariants, assembleEnvelope, describeVariant, EnvelopeFold, foldFor, toleranceSlots, variedCircuit, compare, estimateDelay } from './analysis/envelope/index.ts';
+export type { Envelope, AdcEnvelope, EnvelopeOptions, EnvelopePlan, EnvelopeBounds, ToleranceSlot, Trace, EnvelopeTrace, CompareOptions, Comparison, Violation } from './analysis/envelope/index.ts';
+export type { Tolerance, TolerableValue, Distribution } from './parts/tolerance.ts';

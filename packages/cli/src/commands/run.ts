@@ -1,5 +1,5 @@
 import { basename, extname, join } from 'node:path';
-import { simulate } from '@voltcast/core';
+import { simulate, type TransientResult } from '@voltcast/core';
 import { readCircuitFile } from '../read-circuit-file.ts';
 import { writeOutputDir } from '../output-dir.ts';
 import { WaveformCsv } from '../waveform-csv.ts';
@@ -26,7 +26,7 @@ export function runCommand(file: string, options: RunOptions): void {
   const { report, files } = writeOutputDir(outDir, (staging) => {
     const csv = new WaveformCsv(join(staging, 'waveforms.csv'), circuit.probes);
     const extremes = new ExtremesTracker(circuit.probes);
-    let result;
+    let result: TransientResult;
     try {
       result = simulate(circuit, {
         keepColumns: false,

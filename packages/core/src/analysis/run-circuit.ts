@@ -1,6 +1,8 @@
 import type { Circuit } from '../circuit/circuit.ts';
 import type { SimulateOptions, TransientResult } from '../transient/result.ts';
 import { simulate } from '../transient/simulate.ts';
+import { AdcSampler } from './adc/adc-sampler.ts';
+import type { AdcReadout } from './adc/adc-readout.ts';
 
 /**
  * Everything one run of a circuit produces: the waveforms, and what the analyses made of
@@ -10,6 +12,8 @@ import { simulate } from '../transient/simulate.ts';
 export interface CircuitRun {
   readonly circuit: Circuit;
   readonly transient: TransientResult;
+  /** What each converter of the `adc:` section read, in the section's order. */
+  readonly adcs: readonly AdcReadout[];
 }
 
 /** Options for `runCircuit`: those of `simulate`, plus each analysis's own. */
@@ -21,6 +25,7 @@ export interface RunOptions extends SimulateOptions {}
  * work on the finished waveforms.
  */
 export function runCircuit(circuit: Circuit, options: RunOptions = {}): CircuitRun {
-  const transient = simulate(circuit, { ...options, observers: [...(options.observers ?? [])] });
-  return { circuit, transient };
+  const adcs = circuit.adcs.map((spec) => new AdcSampler(spec, circuit.simulate.duration));
+  const transient = simulate(circuit, { ...options, observers: [...(options.observers ?? []), ...adcs] });
+  return { circuit, transient, adcs: adcs.map((adc) => adc.readout()) };
 }

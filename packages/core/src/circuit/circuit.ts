@@ -1,4 +1,5 @@
 import type { PartSpecBase } from '../parts/part-kind.ts';
+import type { AdcSpec } from '../analysis/adc/adc-spec.ts';
 
 /** How to step through time; every value in SI base units. */
 export interface SimulateSettings {
@@ -27,6 +28,8 @@ export interface Circuit {
   readonly probes: readonly string[];
   /** Every node name except `gnd`, in order of first appearance. */
   readonly nodes: readonly string[];
+  /** Converters of the `adc:` section; their sampling parts are among `parts`. */
+  readonly adcs: readonly AdcSpec[];
 }
 
 /** Defaults for `simulate:` keys the file leaves out. */

@@ -5,9 +5,11 @@ import { CircuitError, type CircuitIssue } from './issue.ts';
 import type { MapReader, ReadContext, ValueReader } from './reader.ts';
 import { IssueSink, YamlValue } from './yaml-reader.ts';
 import { selectKind } from './select-kind.ts';
+import { readTolerances } from './read-tolerance.ts';
 import { checkConnections, nodesInOrder } from './connections.ts';
 import { suggestion } from './suggest.ts';
 import { partKinds } from '../parts/index.ts';
+import { readAdcSection } from '../analysis/adc/read-adc.ts';
 import type { PartSpecBase } from '../parts/part-kind.ts';
 import { quantities } from '../units/quantity.ts';
 import { formatSI } from '../units/format.ts';
@@ -87,15 +89,21 @@ function readDocument(document: Document, sink: IssueSink, context: ReadContext,
   const parts = readParts(top.need('parts', 'list the parts under parts:, e.g. R1: { resistor: 10k, between: [in, out] }'), context);
   const simulate = readSimulate(top.need('simulate', 'write simulate: { duration: 10m }'));
   const probesValue = top.get('probes');
+  const adcValue = top.get('adc');
   top.finish();
 
-  const nodes = nodesInOrder(parts.specs);
+  // A converter's sampling adds parts (switch, capacitor) and nodes of its own.
+  const adc = readAdcSection(adcValue, nodesInOrder(parts.specs), simulate.duration);
+  const specs = [...parts.specs, ...adc.parts];
+  const nodes = nodesInOrder(specs);
   const probes = probesValue === undefined ? nodes : readProbes(probesValue, nodes);
   // With a part unread its pins are unknown, and the connection checks would only mislead.
-  if (parts.complete) checkConnections(parts.specs, probesValue === undefined ? [] : probes, top.get('parts'), sink);
+  // A node an ADC reads is used on purpose, as a probed one is.
+  const watched = [...(probesValue === undefined ? [] : probes), ...adc.adcs.flatMap((a) => a.input)];
+  if (parts.complete) checkConnections(parts.specs, watched, top.get('parts'), sink);
 
   if (sink.issues.some((issue) => issue.severity === 'error')) return { issues: sink.issues };
-  return { circuit: { name, parts: parts.specs, simulate, probes, nodes }, issues: sink.issues };
+  return { circuit: { name, parts: specs, simulate, probes, nodes, adcs: adc.adcs }, issues: sink.issues };
 }
 
 function readName(top: MapReader): string {
@@ -129,8 +137,9 @@ function readPart(name: string, value: ValueReader, context: ReadContext): PartS
   const kind = selectKind(options, partKinds, 'a part', example);
   if (kind === undefined) return undefined;
   const spec = kind.read(name, options.get(kind.key)!, options, context);
+  const tolerances = readTolerances(kind, spec, options);
   options.finish();
-  return spec;
+  return tolerances === undefined ? spec : { ...spec, tolerances };
 }
 
 function readSimulate(value: ValueReader | undefined): SimulateSettings {

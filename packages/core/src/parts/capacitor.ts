@@ -3,6 +3,7 @@ import { stampBranchIncidence, stampBranchVoltage } from '../solver/stamps.ts';
 import { across, CapacitorCompanion } from './capacitor-companion.ts';
 import type { Binder, Device, Link, Mna, StepInfo } from './device.ts';
 import type { PartKind, PartSpecBase } from './part-kind.ts';
+import { tolerableField } from './tolerance.ts';
 import { nodeOf, readBetween } from './pins.ts';
 
 export interface CapacitorSpec extends PartSpecBase {
@@ -28,6 +29,7 @@ export const capacitor: PartKind<CapacitorSpec> = {
     };
   },
   create: (spec) => new CapacitorDevice(spec),
+  tolerable: [tolerableField<CapacitorSpec, 'capacitance'>('capacitor', 'capacitance', quantities.capacitance, { above: 0 })],
 };
 
 /**

@@ -4,6 +4,7 @@ import type { Wave } from '../waves/wave.ts';
 import { stampCurrent } from '../solver/stamps.ts';
 import type { Binder, Device, Link, Mna, StepInfo } from './device.ts';
 import type { PartKind, PartSpecBase } from './part-kind.ts';
+import { sourceTolerance } from './source-tolerance.ts';
 import { nodeOf, readBetween } from './pins.ts';
 
 export interface CurrentSourceSpec extends PartSpecBase {
@@ -23,6 +24,7 @@ export const currentSource: PartKind<CurrentSourceSpec> = {
     pins: readBetween(options),
   }),
   create: (spec) => new CurrentSourceDevice(spec),
+  tolerable: [sourceTolerance<CurrentSourceSpec>('current', quantities.current)],
 };
 
 class CurrentSourceDevice implements Device {

@@ -6,6 +6,7 @@ import { voltageSource } from './voltage-source.ts';
 import { currentSource } from './current-source.ts';
 import { vcvs } from './vcvs.ts';
 import { opamp } from './opamp.ts';
+import { timedSwitch } from './switch.ts';
 
 export type { Device, Binder, Mna, StepInfo, Method, Link } from './device.ts';
 export type { PartKind, PartSpecBase, PinRef } from './part-kind.ts';
@@ -19,6 +20,7 @@ export const partKinds: readonly PartKind<any>[] = [
   currentSource,
   vcvs,
   opamp,
+  timedSwitch,
 ];
 
 /** The kind for a spec's `kind` key. */

@@ -2,6 +2,7 @@ import { quantities } from '../units/quantity.ts';
 import { stampBranchIncidence, stampBranchVoltage } from '../solver/stamps.ts';
 import type { Binder, Device, Link, Mna, StepInfo } from './device.ts';
 import type { PartKind, PartSpecBase } from './part-kind.ts';
+import { tolerableField } from './tolerance.ts';
 import { nodeOf, readBetween } from './pins.ts';
 
 export interface InductorSpec extends PartSpecBase {
@@ -27,6 +28,7 @@ export const inductor: PartKind<InductorSpec> = {
     };
   },
   create: (spec) => new InductorDevice(spec),
+  tolerable: [tolerableField<InductorSpec, 'inductance'>('inductor', 'inductance', quantities.inductance, { above: 0 })],
 };
 
 /**

@@ -7,6 +7,7 @@ import type { Binder, Device, Link, Mna, StepInfo } from './device.ts';
 import type { PartKind, PartSpecBase, PinRef } from './part-kind.ts';
 import { nodeOf, pinRef } from './pins.ts';
 import { opampPresetNames, opampPresets, type OpampParameters, type OpampPresetName } from './opamp-presets.ts';
+import { opampTolerable } from './opamp-tolerable.ts';
 
 /** A supply rail: a fixed voltage, or a node whose voltage the clamp follows. */
 export type Supply = { readonly volts: number } | { readonly node: string };
@@ -37,6 +38,7 @@ export const opamp: PartKind<OpampSpec> = {
     return { kind: 'opamp', name, preset, parameters, pins, ...(supply ? { supply } : {}) };
   },
   create: (spec) => new OpampDevice(spec),
+  tolerable: opampTolerable,
 };
 
 function readParameters(main: ValueReader): { preset: OpampPresetName; parameters: OpampParameters } {
@@ -141,8 +143,20 @@ const C1 = 1e-9;
 const CLAMP_OVERSHOOT = 1e-3;
 /** Conductance of the second-pole stage; its capacitor sets the pole. */
 const G2 = 1e-3;
-/** Newton may move the input stage's normalized drive by at most this per iteration. */
-const DRIVE_STEP_LIMIT = 4;
+/** Newton may move a tanh stage's normalized argument by at most this per iteration. */
+const TANH_STEP_LIMIT = 4;
+
+/**
+ * Newton step limiting for a tanh characteristic, in the spirit of junction limiting: in the
+ * flat parts the slope vanishes and a full Newton step can fling the argument from one
+ * saturated side to the other forever. The argument moves at most TANH_STEP_LIMIT from where
+ * the last iteration linearized, unless both lie deep on the same flat side.
+ */
+function limitTanhArgument(u: number, last: number): number {
+  if (Math.abs(u) > 3 && Math.abs(last) > 3 && Math.sign(u) === Math.sign(last)) return u;
+  if (Math.abs(u - last) <= TANH_STEP_LIMIT) return u;
+  return last + Math.sign(u - last) * TANH_STEP_LIMIT;
+}
 
 /**
  * The macro-model (DESIGN.md): the differential input plus offset drives a transconductance
@@ -172,8 +186,9 @@ class OpampDevice implements Device {
   private readonly gClamp: number;
   private readonly c1 = new CapacitorCompanion(C1);
   private readonly c2: CapacitorCompanion | null;
-  /** Normalized input drive at which the last Newton iteration linearized. */
+  /** Normalized arguments at which the last Newton iteration linearized the input stage and the output limit. */
   private uLast = 0;
+  private wLast = 0;
 
   constructor(readonly spec: OpampSpec) {
     this.name = spec.name;
@@ -236,9 +251,7 @@ class OpampDevice implements Device {
     // Input stage: i = Imax·tanh(u), u = gm·vd / Imax, linearized at a limited u.
     const vd = across(x, this.p, this.m) + q.offset;
     const u = (this.gm * vd) / this.imax;
-    let uLin = u;
-    const sameSaturatedSide = Math.abs(u) > 3 && Math.abs(this.uLast) > 3 && Math.sign(u) === Math.sign(this.uLast);
-    if (!sameSaturatedSide && Math.abs(u - this.uLast) > DRIVE_STEP_LIMIT) uLin = this.uLast + Math.sign(u - this.uLast) * DRIVE_STEP_LIMIT;
+    const uLin = limitTanhArgument(u, this.uLast);
     this.uLast = uLin;
     const th = Math.tanh(uLin);
     const i0 = this.imax * th;
@@ -250,8 +263,8 @@ class OpampDevice implements Device {
     m.rhs(this.n1, i0 + g * (q.offset - vdLin));
 
     this.stampClamp(m, x);
-    if (q.currentLimit !== undefined) this.stampCurrentLimit(m, x, q.rout, q.currentLimit);
-    return uLin !== u;
+    const outputLimited = q.currentLimit !== undefined && this.stampCurrentLimit(m, x, q.rout, q.currentLimit);
+    return uLin !== u || outputLimited;
   }
 
   /** Piecewise clamp of the gain node at the rails less headroom: a stiff conductance beyond them. */
@@ -268,13 +281,17 @@ class OpampDevice implements Device {
     m.rhs(this.n1, this.gClamp * (('volts' in rail ? rail.volts : 0) - headroom));
   }
 
-  /** Output current i = Ilim·tanh(v/(rout·Ilim)) from drive to out, linearized. */
-  private stampCurrentLimit(m: Mna, x: Float64Array, rout: number, limit: number): void {
-    const v = across(x, this.drive, this.out);
-    const th = Math.tanh(v / (rout * limit));
+  /** Output current i = Ilim·tanh(v/(rout·Ilim)) from drive to out, linearized; true when limited. */
+  private stampCurrentLimit(m: Mna, x: Float64Array, rout: number, limit: number): boolean {
+    const scale = rout * limit;
+    const w = across(x, this.drive, this.out) / scale;
+    const wLin = limitTanhArgument(w, this.wLast);
+    this.wLast = wLin;
+    const th = Math.tanh(wLin);
     const g = (1 - th * th) / rout;
     stampConductance(m, this.drive, this.out, g);
-    stampCurrent(m, this.drive, this.out, limit * th - g * v);
+    stampCurrent(m, this.drive, this.out, limit * th - g * wLin * scale);
+    return wLin !== w;
   }
 
   region(x: Float64Array): number {

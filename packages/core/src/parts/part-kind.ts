@@ -1,5 +1,6 @@
 import type { MapReader, ReadContext, ValueReader } from '../circuit/reader.ts';
 import type { Device } from './device.ts';
+import type { TolerableValue, Tolerance } from './tolerance.ts';
 
 /** A node a part connects to, with where it was written (for messages). */
 export interface PinRef {
@@ -14,6 +15,8 @@ export interface PartSpecBase {
   readonly kind: string;
   readonly name: string;
   readonly pins: readonly PinRef[];
+  /** What `tolerance:` lets vary, for envelopes; absent when nothing may. */
+  readonly tolerances?: readonly Tolerance[];
 }
 
 /**
@@ -28,4 +31,9 @@ export interface PartKind<Spec extends PartSpecBase = PartSpecBase> {
   readonly summary: string;
   read(name: string, main: ValueReader, options: MapReader, context: ReadContext): Spec;
   create(spec: Spec): Device;
+  /**
+   * Values that `tolerance:` may vary, for envelopes (Monte Carlo and worst-case corners).
+   * Absent: the kind has no tolerance. The first entry is the main value when its key is `key`.
+   */
+  readonly tolerable?: readonly TolerableValue<Spec>[];
 }

@@ -2,6 +2,7 @@ import { quantities } from '../units/quantity.ts';
 import { stampConductance } from '../solver/stamps.ts';
 import type { Binder, Device, Link, Mna } from './device.ts';
 import type { PartKind, PartSpecBase } from './part-kind.ts';
+import { tolerableField } from './tolerance.ts';
 import { nodeOf, readBetween } from './pins.ts';
 
 export interface ResistorSpec extends PartSpecBase {
@@ -21,6 +22,7 @@ export const resistor: PartKind<ResistorSpec> = {
     pins: readBetween(options),
   }),
   create: (spec) => new ResistorDevice(spec),
+  tolerable: [tolerableField<ResistorSpec, 'resistance'>('resistor', 'resistance', quantities.resistance, { above: 0 })],
 };
 
 class ResistorDevice implements Device {

@@ -2,6 +2,7 @@ import { quantities } from '../units/quantity.ts';
 import { stampBranchIncidence, stampBranchVoltage } from '../solver/stamps.ts';
 import type { Binder, Device, Link, Mna } from './device.ts';
 import type { PartKind, PartSpecBase } from './part-kind.ts';
+import { tolerableField } from './tolerance.ts';
 import { nodeOf, pinRef, readBetween } from './pins.ts';
 
 export interface VcvsSpec extends PartSpecBase {
@@ -27,6 +28,7 @@ export const vcvs: PartKind<VcvsSpec> = {
     };
   },
   create: (spec) => new VcvsDevice(spec),
+  tolerable: [tolerableField<VcvsSpec, 'gain'>('vcvs', 'gain', quantities.gain)],
 };
 
 class VcvsDevice implements Device {

@@ -4,6 +4,7 @@ import type { Wave } from '../waves/wave.ts';
 import { stampBranchIncidence, stampBranchVoltage } from '../solver/stamps.ts';
 import type { Binder, Device, Link, Mna, StepInfo } from './device.ts';
 import type { PartKind, PartSpecBase } from './part-kind.ts';
+import { sourceTolerance } from './source-tolerance.ts';
 import { nodeOf, readBetween } from './pins.ts';
 
 export interface VoltageSourceSpec extends PartSpecBase {
@@ -23,6 +24,7 @@ export const voltageSource: PartKind<VoltageSourceSpec> = {
     pins: readBetween(options),
   }),
   create: (spec) => new VoltageSourceDevice(spec),
+  tolerable: [sourceTolerance<VoltageSourceSpec>('voltage', quantities.voltage)],
 };
 
 /** Its branch current flows from `a` through the source into `b`. */

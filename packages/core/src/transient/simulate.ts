@@ -13,8 +13,8 @@ import { TruncationError } from './truncation-error.ts';
 const FIRST_STEP_FRACTION = 1e-3;
 /** Largest growth of the step from one step to the next. */
 const MAX_GROWTH = 2;
-/** Growth below this keeps the step unchanged, so that its factorization is reused. */
-const KEEP_BELOW = 1.2;
+/** The step grows only when the estimate allows at least this factor. */
+const GROW_ABOVE = 1.5;
 /** Safety factor on the step the error estimate proposes. */
 const SAFETY = 0.9;
 /** Newton iterations before a step is cut. */
@@ -129,8 +129,11 @@ export function simulate(circuit: Circuit, options: SimulateOptions = {}): Trans
     if (t + h >= target - eps) {
       h = target - t;
       landing = true;
-    } else if (fixed === undefined && t + 1.5 * h > target) {
-      h = (target - t) / 2;
+    } else if (fixed === undefined) {
+      // Split the way to the next landing point into equal steps: no sliver before it, and
+      // the same step (so the same factorization) between evenly spaced output rows.
+      h = (target - t) / Math.ceil((target - t) / h - 1e-9);
+      landing = h === target - t;
     }
     // Keep the previous step exactly when this one differs only by rounding: same matrix.
     if (Math.abs(h - lastH) <= eps) h = lastH;
@@ -143,6 +146,7 @@ export function simulate(circuit: Circuit, options: SimulateOptions = {}): Trans
       stats.newtonFailures++;
       stats.rejectedSteps++;
       natural = h / 8;
+      if (cut < Infinity) cut = natural;
       if (natural < floor) throw stuck(t, equations.worstUnknowns(x, trial, 3), 'Newton iterations did not converge');
       continue;
     }
@@ -160,10 +164,13 @@ export function simulate(circuit: Circuit, options: SimulateOptions = {}): Trans
       if (ratio > 1) {
         stats.rejectedSteps++;
         natural = Math.max(proposal, h * 0.1);
+        if (cut < Infinity) cut = natural;
         if (natural < floor) throw stuck(t, [topology.labels[worst.index]], 'the local truncation error stayed above tolerance');
         continue;
       }
-      if (cut === Infinity && (!landing || proposal < natural)) natural = proposal >= h && proposal < h * KEEP_BELOW ? h : proposal;
+      // An accepted step is kept until the estimate allows a clear increase: every change of
+      // step size costs a new factorization.
+      if (cut === Infinity && !landing) natural = proposal >= h * GROW_ABOVE ? proposal : h;
     } else {
       natural = fixed;
     }

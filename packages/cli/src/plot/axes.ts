@@ -1,0 +1,32 @@
+import type { ScaleLinear } from 'd3-scale';
+import { siLabel } from './si-format.ts';
+import { element, text } from './svg.ts';
+
+const tickLength = 5;
+const gridColour = '#e3e3e3';
+const inkColour = '#333333';
+
+/** Time axis under a panel, with grid lines up through it. */
+export function timeAxis(x: ScaleLinear<number, number>, top: number, bottom: number, label: boolean): string {
+  const parts: string[] = [];
+  for (const tick of x.ticks(8)) {
+    const px = x(tick);
+    parts.push(element('line', { x1: px, x2: px, y1: top, y2: bottom, stroke: gridColour }));
+    parts.push(element('line', { x1: px, x2: px, y1: bottom, y2: bottom + tickLength, stroke: inkColour }));
+    parts.push(text(px, bottom + tickLength + 12, siLabel(tick, 's'), { 'text-anchor': 'middle' }));
+  }
+  if (label) parts.push(text((x.range()[0] + x.range()[1]) / 2, bottom + 38, 'time', { 'text-anchor': 'middle', fill: '#666' }));
+  return element('g', { class: 'axis time', 'font-size': 11, fill: inkColour }, ...parts);
+}
+
+/** Value axis left of a panel, with grid lines across it. */
+export function valueAxis(y: ScaleLinear<number, number>, left: number, right: number, unit: string): string {
+  const parts: string[] = [];
+  for (const tick of y.ticks(5)) {
+    const py = y(tick);
+    parts.push(element('line', { x1: left, x2: right, y1: py, y2: py, stroke: gridColour }));
+    parts.push(element('line', { x1: left - tickLength, x2: left, y1: py, y2: py, stroke: inkColour }));
+    parts.push(text(left - tickLength - 3, py + 4, siLabel(tick, unit), { 'text-anchor': 'end' }));
+  }
+  return element('g', { class: 'axis value', 'font-size': 11, fill: inkColour }, ...parts);
+}

@@ -1,0 +1,47 @@
+import { curveStepAfter, line } from 'd3-shape';
+import type { ScaleLinear } from 'd3-scale';
+import { decimate } from './decimate.ts';
+import type { Series } from './series.ts';
+import { element } from './svg.ts';
+
+const markRadius = 3.5;
+
+/** One `<path>` for one series, tagged with `data-series` (its name). */
+export function drawSeries(series: Series, colour: string, x: ScaleLinear<number, number>, y: ScaleLinear<number, number>): string {
+  const columns = Math.abs(x.range()[1] - x.range()[0]);
+  const tag = { 'data-series': series.name, class: `series ${series.kind}` };
+  switch (series.kind) {
+    case 'line':
+    case 'steps': {
+      const { time, values } = decimate(series.time, series.values, columns);
+      const path = line<number>()
+        .x((i) => x(time[i]))
+        .y((i) => y(values[i]))
+        .defined((i) => Number.isFinite(values[i]));
+      if (series.kind === 'steps') path.curve(curveStepAfter);
+      return element('path', { ...tag, d: path(time.map((_, i) => i)) ?? '', fill: 'none', stroke: colour, 'stroke-width': series.kind === 'steps' ? 1.25 : 1.5, 'stroke-dasharray': series.kind === 'line' && series.dashed ? '5 3' : undefined, 'stroke-linejoin': 'round' });
+    }
+    case 'band': {
+      // Thinned separately, the two edges may keep different times: walk the lower edge
+      // forward and the upper edge back, and close the ring.
+      const low = decimate(series.time, series.low, columns);
+      const high = decimate(series.time, series.high, columns);
+      const ring: [number, number][] = [...low.time.map((t, i): [number, number] => [t, low.values[i]]), ...high.time.map((t, i): [number, number] => [t, high.values[i]]).reverse()];
+      const outline = line<[number, number]>()
+        .x((p) => x(p[0]))
+        .y((p) => y(p[1]));
+      // Held values: each edge steps after its time going forward, before it coming back.
+      if (series.stepped) outline.curve(curveStepAfter);
+      return element('path', { ...tag, d: `${outline(ring) ?? ''}Z`, fill: colour, 'fill-opacity': 0.22, stroke: colour, 'stroke-opacity': 0.5, 'stroke-width': 0.75 });
+    }
+    case 'marks': {
+      let d = '';
+      for (let i = 0; i < series.time.length; i++) {
+        const cx = x(series.time[i]);
+        const cy = y(series.values[i]);
+        d += `M${(cx - markRadius).toFixed(2)},${cy.toFixed(2)}a${markRadius},${markRadius} 0 1,0 ${2 * markRadius},0a${markRadius},${markRadius} 0 1,0 ${-2 * markRadius},0`;
+      }
+      return element('path', { ...tag, d, fill: 'none', stroke: colour, 'stroke-width': 1.5 });
+    }
+  }
+}

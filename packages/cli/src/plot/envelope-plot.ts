@@ -1,0 +1,29 @@
+import type { Envelope } from '@voltcast/core';
+import { colour } from './palette.ts';
+import type { Figure, Panel } from './series.ts';
+
+/** `voltcast envelope --plot`: per probe its band (min to max) with the nominal in it; per ADC its codes, held between conversions. */
+export function envelopeFigure(result: Envelope, circuitName: string, fileName: string): Figure {
+  const panels: Panel[] = result.probes.map((probe, i) => ({
+    title: probe,
+    unit: 'V',
+    series: [
+      { kind: 'band', name: `${probe} min..max`, time: result.time, low: result.min.get(probe)!, high: result.max.get(probe)! },
+      { kind: 'line', name: `${probe} nominal`, time: result.time, values: result.nominal.get(probe)! },
+    ],
+    colours: [colour(i), colour(i)],
+  }));
+  for (const adc of result.adcs) {
+    panels.push({
+      title: `ADC ${adc.name} codes`,
+      unit: '',
+      series: [
+        { kind: 'band', name: `${adc.name} min..max`, time: adc.time, low: adc.min, high: adc.max, stepped: true },
+        { kind: 'steps', name: `${adc.name} nominal`, time: adc.time, values: adc.nominal },
+      ],
+      colours: [colour(panels.length), colour(panels.length)],
+    });
+  }
+  const what = [result.runs > 0 ? `${result.runs} Monte Carlo runs (seed ${result.seed})` : '', result.corners > 0 ? `${result.corners} corners` : ''].filter((s) => s !== '');
+  return { title: `${circuitName}: tolerance envelope`, subtitle: `${fileName}: ${what.join(' and ')}`, panels };
+}

@@ -1,0 +1,27 @@
+/** What a plot draws, one SVG path per series. Times in seconds, values in `unit`. */
+export type Series =
+  /** A waveform. */
+  | { readonly kind: 'line'; readonly name: string; readonly time: ArrayLike<number>; readonly values: ArrayLike<number>; readonly dashed?: boolean }
+  /** A shaded band between two curves (a tolerance envelope); `stepped` holds values until the next time (codes). */
+  | { readonly kind: 'band'; readonly name: string; readonly time: ArrayLike<number>; readonly low: ArrayLike<number>; readonly high: ArrayLike<number>; readonly stepped?: boolean }
+  /** Values held until the next sample (ADC codes). */
+  | { readonly kind: 'steps'; readonly name: string; readonly time: ArrayLike<number>; readonly values: ArrayLike<number> }
+  /** Marked points (violations). */
+  | { readonly kind: 'marks'; readonly name: string; readonly time: ArrayLike<number>; readonly values: ArrayLike<number> };
+
+/** One stacked panel: its own y axis, the shared time axis. */
+export interface Panel {
+  readonly title: string;
+  /** Unit of the y axis (`V`, or '' for codes). */
+  readonly unit: string;
+  readonly series: readonly Series[];
+  /** Colour per series, by index in `series`; a band and its nominal line may share one. */
+  readonly colours: readonly string[];
+}
+
+export interface Figure {
+  readonly title: string;
+  /** A second line under the title (file, seed, verdict). */
+  readonly subtitle?: string;
+  readonly panels: readonly Panel[];
+}

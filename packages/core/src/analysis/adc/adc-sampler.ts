@@ -1,0 +1,177 @@
+import type { ObserverContext, StepObserver } from '../../transient/observer.ts';
+import type { AdcSpec } from './adc-spec.ts';
+import type { AdcReadout } from './adc-readout.ts';
+import type { ClippedSamples, CodeError, TimeInterval } from './adc-report.ts';
+import { SampleSchedule } from './sample-schedule.ts';
+import { Transfer } from './transfer.ts';
+import { SeededNoise } from './noise.ts';
+import { encode } from './coding.ts';
+
+/**
+ * One converter watching the run. Its sample instants are landing points of the stepper, so
+ * the value it converts is the solver's own solution at each instant, never an interpolation.
+ * Every `average` consecutive samples make one reported code. All storage is sized before
+ * the run: nothing is allocated per sample.
+ */
+export class AdcSampler implements StepObserver {
+  private readonly schedule: SampleSchedule;
+  private readonly transfer: Transfer;
+  private readonly noise: SeededNoise;
+  private readonly tolerance: number;
+  private readonly rows: number;
+  private readonly time: Float64Array;
+  private readonly volts: Float64Array;
+  private readonly code: Int32Array;
+  private readonly ideal: Int32Array;
+  /** With sampling: ideal code of the input as it was when the acquisition window opened. */
+  private readonly idealBefore: Int32Array;
+  /** Acquisition window length; 0 without sampling. */
+  private readonly acquisition: number;
+  /** Input volts when the window of sample `next` opened (NaN until then). */
+  private inputBefore = NaN;
+  /** Per sample: -1 input below the range, 1 above, 0 within. */
+  private readonly clipped: Int8Array;
+  private heldPlus = -1;
+  private heldMinus = -1;
+  private inputPlus = -1;
+  private inputMinus = -1;
+  private next = 0;
+  private sumVolts = 0;
+  private sumCode = 0;
+  private sumIdeal = 0;
+  private sumIdealBefore = 0;
+  private largestHeldError = 0;
+
+  constructor(
+    readonly spec: AdcSpec,
+    duration: number,
+  ) {
+    this.schedule = new SampleSchedule(spec.times, duration);
+    this.transfer = new Transfer(spec);
+    this.noise = new SeededNoise(spec.seed, spec.noise);
+    this.tolerance = duration * 1e-12;
+    this.rows = Math.floor(this.schedule.count / spec.average);
+    this.time = new Float64Array(this.rows);
+    this.volts = new Float64Array(this.rows);
+    this.code = new Int32Array(this.rows);
+    this.ideal = new Int32Array(this.rows);
+    this.idealBefore = new Int32Array(spec.sampling !== undefined ? this.rows : 0);
+    this.acquisition = spec.sampling?.acquisition ?? 0;
+    this.clipped = new Int8Array(this.rows * spec.average);
+  }
+
+  bind(context: ObserverContext): void {
+    this.heldPlus = context.node(this.spec.held[0]);
+    this.heldMinus = context.node(this.spec.held[1]);
+    this.inputPlus = context.node(this.spec.input[0]);
+    this.inputMinus = context.node(this.spec.input[1]);
+  }
+
+  /** The next sample instant, or with sampling the opening of its window when still ahead. */
+  nextInstant(t: number): number {
+    for (let k = this.next; k < this.clipped.length; k++) {
+      const instant = this.schedule.instant(k);
+      const opens = instant - this.acquisition;
+      if (k === this.next && this.acquisition > 0 && Number.isNaN(this.inputBefore) && opens > t) return opens;
+      if (instant > t) return instant;
+    }
+    return Infinity;
+  }
+
+  accepted(t: number, x: Float64Array): void {
+    const count = this.clipped.length;
+    if (this.acquisition > 0 && this.next < count && Number.isNaN(this.inputBefore) && t >= this.schedule.instant(this.next) - this.acquisition - this.tolerance) {
+      this.inputBefore = this.input(x);
+    }
+    while (this.next < count && this.schedule.instant(this.next) <= t + this.tolerance) this.convert(this.next++, x);
+  }
+
+  private input(x: Float64Array): number {
+    return at(x, this.inputPlus) - at(x, this.inputMinus);
+  }
+
+  private convert(k: number, x: Float64Array): void {
+    const held = at(x, this.heldPlus) - at(x, this.heldMinus);
+    const input = this.input(x);
+    const t = this.transfer;
+    const raw = t.unbounded(held, this.noise.next());
+    this.clipped[k] = raw < 0 ? -1 : raw > t.top ? 1 : 0;
+    this.sumCode += t.clip(raw);
+    this.sumIdeal += t.clip(t.ideal(input));
+    // A window that opened before the run (first sample at 0) starts from the operating point.
+    if (this.acquisition > 0) this.sumIdealBefore += t.clip(t.ideal(Number.isNaN(this.inputBefore) ? input : this.inputBefore));
+    this.inputBefore = NaN;
+    this.sumVolts += held;
+    const heldError = Math.abs(held - input);
+    if (heldError > this.largestHeldError) this.largestHeldError = heldError;
+    const average = this.spec.average;
+    if ((k + 1) % average !== 0) return;
+    const row = (k + 1) / average - 1;
+    this.time[row] = this.schedule.instant(k);
+    this.volts[row] = this.sumVolts / average;
+    this.code[row] = encode(Math.round(this.sumCode / average), this.spec.bits, this.spec.coding);
+    this.ideal[row] = encode(Math.round(this.sumIdeal / average), this.spec.bits, this.spec.coding);
+    if (this.acquisition > 0) this.idealBefore[row] = encode(Math.round(this.sumIdealBefore / average), this.spec.bits, this.spec.coding);
+    this.sumVolts = this.sumCode = this.sumIdeal = this.sumIdealBefore = 0;
+  }
+
+  /** The codes read, with the report; call after the run. */
+  readout(): AdcReadout {
+    const { spec, rows, code, time } = this;
+    let low = Infinity;
+    let high = -Infinity;
+    for (let r = 0; r < rows; r++) {
+      low = Math.min(low, code[r]);
+      high = Math.max(high, code[r]);
+    }
+    const largestError = largestDifference(code, this.ideal, time);
+    const largestErrorBeforeWindow = spec.sampling !== undefined ? largestDifference(code, this.idealBefore, time) : undefined;
+    return {
+      spec,
+      index: Int32Array.from({ length: rows }, (_, r) => r),
+      time,
+      volts: this.volts,
+      code,
+      report: {
+        name: spec.name,
+        lsb: this.transfer.lsb,
+        samples: this.clipped.length,
+        codes: rows,
+        ...(rows > 0 ? { codeRange: [low, high] as const } : {}),
+        clippedLow: this.clippedRuns(-1),
+        clippedHigh: this.clippedRuns(1),
+        ...(largestError !== undefined ? { largestError } : {}),
+        ...(largestErrorBeforeWindow !== undefined ? { largestErrorBeforeWindow } : {}),
+        largestHeldError: this.largestHeldError,
+      },
+    };
+  }
+
+  private clippedRuns(side: -1 | 1): ClippedSamples {
+    const intervals: TimeInterval[] = [];
+    let count = 0;
+    let from = -1;
+    for (let k = 0; k <= this.clipped.length; k++) {
+      const inside = k < this.clipped.length && this.clipped[k] === side;
+      if (inside) count++;
+      if (inside && from < 0) from = k;
+      if (!inside && from >= 0) {
+        intervals.push({ from: this.schedule.instant(from), to: this.schedule.instant(k - 1) });
+        from = -1;
+      }
+    }
+    return { count, intervals };
+  }
+}
+
+/** The row where `code` differs most from `ideal` (the first of equals). */
+function largestDifference(code: Int32Array, ideal: Int32Array, time: Float64Array): CodeError | undefined {
+  let worst = -1;
+  for (let r = 0; r < code.length; r++) if (worst < 0 || Math.abs(code[r] - ideal[r]) > Math.abs(code[worst] - ideal[worst])) worst = r;
+  if (worst < 0) return undefined;
+  return { codes: code[worst] - ideal[worst], index: worst, time: time[worst], read: code[worst], ideal: ideal[worst] };
+}
+
+function at(x: Float64Array, index: number): number {
+  return index >= 0 ? x[index] : 0;
+}

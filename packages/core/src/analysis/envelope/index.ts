@@ -1,0 +1,10 @@
+export { envelope, envelopePlan, planVariants, runVariants, assembleEnvelope, describeVariant, foldFor } from './envelope.ts';
+export type { Envelope, AdcEnvelope, EnvelopeOptions, EnvelopePlan } from './envelope.ts';
+export { EnvelopeFold } from './fold.ts';
+export type { EnvelopeBounds } from './fold.ts';
+export { toleranceSlots, variedCircuit } from './varied-circuit.ts';
+export type { ToleranceSlot } from './varied-circuit.ts';
+export { cornerCount, exhaustiveCornerLimit } from './corners.ts';
+export { compare } from './compare.ts';
+export type { Trace, EnvelopeTrace, CompareOptions, Comparison, Violation } from './compare.ts';
+export { estimateDelay } from './time-alignment.ts';

@@ -1,0 +1,65 @@
+import { mkdtempSync, readFileSync, readdirSync, rmSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
+import { afterAll, beforeAll, describe, expect, test } from 'vitest';
+import { runCli } from './support/run-cli.ts';
+
+// An invented divider with an RC: four toleranced values, small enough for quick runs.
+const circuit = `circuit: invented-envelope-workers
+parts:
+  VS: { voltage: { points: [[0, 0], [0.1m, 0], [0.11m, 5]] }, tolerance: 1%, between: [in, gnd] }
+  RTOP: { resistor: 10k, tolerance: 1%, distribution: normal, between: [in, mid] }
+  RBOT: { resistor: 10k, tolerance: 1%, distribution: normal, between: [mid, gnd] }
+  CF: { capacitor: 10n, tolerance: 10%, between: [mid, gnd] }
+simulate: { duration: 0.5m, output-step: 5u }
+probes: [mid]
+`;
+
+let scratch: string;
+let file: string;
+beforeAll(() => {
+  scratch = mkdtempSync(join(tmpdir(), 'voltcast-envelope-'));
+  file = join(scratch, 'divider.yaml');
+  writeFileSync(file, circuit);
+});
+afterAll(() => rmSync(scratch, { recursive: true, force: true }));
+
+async function envelopeCsv(out: string, ...options: string[]): Promise<string> {
+  const { code, stderr } = await runCli(['envelope', file, '--out', join(scratch, out), '--quiet', ...options]);
+  expect(stderr).toBe('');
+  expect(code).toBe(0);
+  return readFileSync(join(scratch, out, 'envelope.csv'), 'utf8');
+}
+
+describe('voltcast envelope', () => {
+  test('gives the same envelope bit for bit with 1 and with 2 workers', async () => {
+    const one = await envelopeCsv('one', '--runs', '40', '--seed', '11', '--corners', '--workers', '1');
+    const two = await envelopeCsv('two', '--runs', '40', '--seed', '11', '--corners', '--workers', '2', '--plot');
+    expect(two).toBe(one);
+    expect(readdirSync(join(scratch, 'two')).sort()).toEqual(['envelope.csv', 'plot.svg']);
+    const lines = one.trimEnd().split('\n');
+    expect(lines[0]).toBe('time,mid.min,mid.nominal,mid.max');
+    expect(lines.length).toBe(1 + 101);
+    // At the end the filter has settled: the divider's worst case, 5 V ± 1% times
+    // 10k/(10k+10k) with 1% resistors (extreme value analysis, any tolerance-analysis text).
+    const [, min, nominal, max] = lines.at(-1)!.split(',').map(Number);
+    expect(nominal).toBeCloseTo(2.5, 4);
+    expect(max).toBeCloseTo((5.05 * 10.1) / (9.9 + 10.1), 4);
+    expect(min).toBeCloseTo((4.95 * 9.9) / (10.1 + 9.9), 4);
+  });
+
+  test('changes with the seed', async () => {
+    const a = await envelopeCsv('seed-a', '--runs', '10', '--seed', '1', '--workers', '1');
+    const b = await envelopeCsv('seed-b', '--runs', '10', '--seed', '2', '--workers', '1');
+    expect(a).not.toBe(b);
+  });
+
+  test('refuses to run with nothing to vary or a bad run count (exit 2)', async () => {
+    const none = await runCli(['envelope', file, '--out', join(scratch, 'none')]);
+    expect(none.code).toBe(2);
+    expect(none.stderr).toMatch(/--runs N/);
+    const bad = await runCli(['envelope', file, '--runs', 'many', '--out', join(scratch, 'bad')]);
+    expect(bad.code).toBe(2);
+    expect(bad.stderr).toMatch(/--runs many is not a whole number/);
+  });
+});

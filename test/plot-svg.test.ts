@@ -1,0 +1,75 @@
+import { describe, expect, it } from 'vitest';
+import { buildCircuit, compare, envelope, runCircuit } from '@voltcast/core';
+import { renderFigure } from '../packages/cli/src/plot/render-figure.ts';
+import { runFigure } from '../packages/cli/src/plot/run-plot.ts';
+import { envelopeFigure } from '../packages/cli/src/plot/envelope-plot.ts';
+import { compareFigure } from '../packages/cli/src/plot/compare-plot.ts';
+import { siLabel } from '../packages/cli/src/plot/si-format.ts';
+import { xmlProblems } from './support/xml-well-formed.ts';
+
+// An invented RC filter with a 5% resistor; the capture below is synthetic.
+const circuit = buildCircuit({
+  circuit: 'invented-plot-filter',
+  parts: {
+    VS: { voltage: { square: { low: 0, high: 3.3, frequency: '1k' } }, between: ['in', 'gnd'] },
+    R1: { resistor: '1k', tolerance: '5%', between: ['in', 'out'] },
+    C1: { capacitor: '47n', between: ['out', 'gnd'] },
+  },
+  simulate: { duration: '3m', 'output-step': '5u' },
+  probes: ['in', 'out'],
+});
+
+/** Paths per `data-series` name, and every path in the document. */
+function paths(svg: string): { all: number; series: string[] } {
+  return { all: svg.match(/<path\b/g)?.length ?? 0, series: [...svg.matchAll(/<path\b[^>]*data-series="([^"]*)"/g)].map((m) => m[1]) };
+}
+
+describe('SVG plots', () => {
+  it('draw a run as well-formed XML with one path per probe', () => {
+    const svg = renderFigure(runFigure(circuit, 'invented <plot> & co.yaml', runCircuit(circuit).transient));
+    // Well-formedness per the XML 1.0 specification (checker in test/support).
+    expect(xmlProblems(svg)).toEqual([]);
+    expect(paths(svg)).toEqual({ all: 2, series: ['in', 'out'] });
+    // The file name's < and & are escaped, not dropped (XML 1.0 section 2.4).
+    expect(svg).toContain('invented &lt;plot&gt; &amp; co.yaml');
+  });
+
+  it('draw an envelope as a band and a nominal path per probe', () => {
+    const result = envelope(circuit, { corners: true });
+    const svg = renderFigure(envelopeFigure(result, circuit.name, 'invented.yaml'));
+    expect(xmlProblems(svg)).toEqual([]);
+    expect(paths(svg)).toEqual({ all: 4, series: ['in min..max', 'in nominal', 'out min..max', 'out nominal'] });
+  });
+
+  it('draw a comparison with its violations as one more path', () => {
+    const result = envelope(circuit, { corners: true });
+    const limits = { time: result.time, min: result.min.get('out')!, nominal: result.nominal.get('out')!, max: result.max.get('out')! };
+    const capture = { time: result.time, values: Float64Array.from(limits.nominal, (v, i) => (i >= 100 && i < 110 ? v + 1 : v)) };
+    const verdict = compare(capture, limits);
+    expect(verdict.violations.length).toBe(10); // rows 100..109, by construction
+    const svg = renderFigure(compareFigure('out', capture, limits, verdict, 'capture.csv against envelope.csv'));
+    expect(xmlProblems(svg)).toEqual([]);
+    expect(paths(svg).series).toEqual(['expected min..max', 'expected nominal', 'measured', 'violations (10)']);
+    // Ten circles, each drawn as two arcs in the one path.
+    const marks = /data-series="violations \(10\)"[^>]* d="([^"]*)"/.exec(svg)![1];
+    expect(marks.match(/a/g)!.length).toBe(20);
+  });
+
+  it('label axes with SI prefixes', () => {
+    // SI prefixes (BIPM, The International System of Units, 9th edition, table 7).
+    expect(siLabel(0.0025, 's')).toBe('2.5 ms');
+    expect(siLabel(5e-6, 's')).toBe('5 µs');
+    expect(siLabel(-0.5, 'V')).toBe('-500 mV');
+    expect(siLabel(1500, 'V')).toBe('1.5 kV');
+    expect(siLabel(0, 'V')).toBe('0 V');
+  });
+
+  it('has a checker that catches broken XML', () => {
+    // Each of these breaks a rule of XML 1.0 section 2.1 (the checker must not pass them).
+    expect(xmlProblems('<svg><g></svg>')).not.toEqual([]);
+    expect(xmlProblems('<svg a="1" a="2"/>')).not.toEqual([]);
+    expect(xmlProblems('<svg>R & D</svg>')).not.toEqual([]);
+    expect(xmlProblems('<svg/><svg/>')).not.toEqual([]);
+    expect(xmlProblems('<svg a=1/>')).not.toEqual([]);
+  });
+});
