@@ -10,9 +10,11 @@ parts:
   VS: { voltage: { points: [[0, 0], [0.1m, 0], [0.11m, 5]] }, tolerance: 1%, between: [in, gnd] }
   RTOP: { resistor: 10k, tolerance: 1%, distribution: normal, between: [in, mid] }
   RBOT: { resistor: 10k, tolerance: 1%, distribution: normal, between: [mid, gnd] }
-  CF: { capacitor: 10n, tolerance: 10%, between: [mid, gnd] }
+  CF: { capacitor: 1n, tolerance: 10%, between: [mid, gnd] }
 simulate: { duration: 0.5m, output-step: 5u }
 probes: [mid]
+adc:
+  CONV: { input: mid, bits: 12, range: [0, 5], rate: 20k }
 `;
 
 let scratch: string;
@@ -31,12 +33,15 @@ async function envelopeCsv(out: string, ...options: string[]): Promise<string> {
   return readFileSync(join(scratch, out, 'envelope.csv'), 'utf8');
 }
 
+const adcCsv = (out: string) => readFileSync(join(scratch, out, 'envelope-adc-CONV.csv'), 'utf8');
+
 describe('voltcast envelope', () => {
   test('gives the same envelope bit for bit with 1 and with 2 workers', async () => {
     const one = await envelopeCsv('one', '--runs', '40', '--seed', '11', '--corners', '--workers', '1');
     const two = await envelopeCsv('two', '--runs', '40', '--seed', '11', '--corners', '--workers', '2', '--plot');
     expect(two).toBe(one);
-    expect(readdirSync(join(scratch, 'two')).sort()).toEqual(['envelope.csv', 'plot.svg']);
+    expect(adcCsv('two')).toBe(adcCsv('one'));
+    expect(readdirSync(join(scratch, 'two')).sort()).toEqual(['envelope-adc-CONV.csv', 'envelope.csv', 'plot.svg']);
     const lines = one.trimEnd().split('\n');
     expect(lines[0]).toBe('time,mid.min,mid.nominal,mid.max');
     expect(lines.length).toBe(1 + 101);
@@ -46,6 +51,12 @@ describe('voltcast envelope', () => {
     expect(nominal).toBeCloseTo(2.5, 4);
     expect(max).toBeCloseTo((5.05 * 10.1) / (9.9 + 10.1), 4);
     expect(min).toBeCloseTo((4.95 * 9.9) / (10.1 + 9.9), 4);
+    // The converter's last code: 12 bits over 0..5 V round to the nearest code (IEEE Std 1241's
+    // ideal ADC), so code = round(v / 5 · 4096) for each of min, nominal and max.
+    const codes = adcCsv('one').trimEnd().split('\n');
+    expect(codes[0]).toBe('index,time,code.min,code.nominal,code.max');
+    const [, , codeMin, codeNominal, codeMax] = codes.at(-1)!.split(',').map(Number);
+    expect([codeMin, codeNominal, codeMax]).toEqual([min, nominal, max].map((v) => Math.round((v / 5) * 4096)));
   });
 
   test('changes with the seed', async () => {

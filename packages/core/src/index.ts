@@ -6,13 +6,14 @@
  * @packageDocumentation
  */
 export { readCircuit, parseCircuit, buildCircuit } from './circuit/parse-circuit.ts';
-export type { ParseOptions } from './circuit/parse-circuit.ts';
+export type { ParseOptions, ReadCircuitResult } from './circuit/parse-circuit.ts';
 export type { Circuit, SimulateSettings } from './circuit/circuit.ts';
 export { CircuitError, formatIssue } from './circuit/issue.ts';
 export type { CircuitIssue, SourcePosition } from './circuit/issue.ts';
 export type { ValueReader, MapReader, ReadContext, NumberLimits } from './circuit/reader.ts';
 
 export { parseQuantity, formatSI } from './units/index.ts';
+export type { ParsedQuantity } from './units/index.ts';
 export { quantities } from './units/quantity.ts';
 export type { Quantity } from './units/quantity.ts';
 

@@ -1,6 +1,6 @@
 import { curveStepAfter, line } from 'd3-shape';
 import type { ScaleLinear } from 'd3-scale';
-import { decimate } from './decimate.ts';
+import { decimate, type Points } from './decimate.ts';
 import type { Series } from './series.ts';
 import { element } from './svg.ts';
 
@@ -26,12 +26,11 @@ export function drawSeries(series: Series, colour: string, x: ScaleLinear<number
       // forward and the upper edge back, and close the ring.
       const low = decimate(series.time, series.low, columns);
       const high = decimate(series.time, series.high, columns);
-      const ring: [number, number][] = [...low.time.map((t, i): [number, number] => [t, low.values[i]]), ...high.time.map((t, i): [number, number] => [t, high.values[i]]).reverse()];
+      const edge = (points: Points) => (series.stepped ? staircase(points) : points.time.map((t, i): [number, number] => [t, points.values[i]]));
+      const ring = [...edge(low), ...edge(high).reverse()];
       const outline = line<[number, number]>()
         .x((p) => x(p[0]))
         .y((p) => y(p[1]));
-      // Held values: each edge steps after its time going forward, before it coming back.
-      if (series.stepped) outline.curve(curveStepAfter);
       return element('path', { ...tag, d: `${outline(ring) ?? ''}Z`, fill: colour, 'fill-opacity': 0.22, stroke: colour, 'stroke-opacity': 0.5, 'stroke-width': 0.75 });
     }
     case 'marks': {
@@ -44,4 +43,10 @@ export function drawSeries(series: Series, colour: string, x: ScaleLinear<number
       return element('path', { ...tag, d, fill: 'none', stroke: colour, 'stroke-width': 1.5 });
     }
   }
+}
+
+/** Corner points of values held from each time to the next (codes between conversions). */
+function staircase(points: Points): [number, number][] {
+  const { time, values } = points;
+  return time.flatMap((t, i): [number, number][] => (i + 1 < time.length ? [[t, values[i]], [time[i + 1], values[i]]] : [[t, values[i]]]));
 }

@@ -164,8 +164,8 @@ export class Equations {
     this.stats.factorizations++;
     if (singular >= 0) {
       const cause = diagnoseSingular(this.devices, this.topology, singular);
-      const when = step.method === 'dc' ? 'at the operating point' : `at t = ${step.t} s`;
-      throw new SimulationError(`${cause.message} (${when})`, step.method === 'dc' ? NaN : step.t, cause.nodes, cause.hint, cause.parts);
+      // The time travels in the error's `time` field (NaN for the operating point).
+      throw new SimulationError(cause.message, step.method === 'dc' ? NaN : step.t, cause.nodes, cause.hint, cause.parts);
     }
     this.factored.set(matrix);
     this.factorValid = true;

@@ -8,6 +8,7 @@ import { OutputGrid } from './output-grid.ts';
 import type { RunStats, SimulateOptions, TransientResult } from './result.ts';
 import { SimulationError } from './simulation-error.ts';
 import { TruncationError } from './truncation-error.ts';
+import { formatSI } from '../units/format.ts';
 
 /** Fraction of the step before a corner used for the first (backward-Euler) step after it. */
 const FIRST_STEP_FRACTION = 1e-3;
@@ -208,7 +209,7 @@ export function simulate(circuit: Circuit, options: SimulateOptions = {}): Trans
 
 function stuck(t: number, nodes: string[], why: string): SimulationError {
   return new SimulationError(
-    `the step size fell below the floor at t = ${t} s: ${why} at ${nodes.join(', ')}`,
+    `the step size fell below its floor at t = ${formatSI(t, 's', 6)}: ${why} at ${nodes.join(', ')}`,
     t,
     nodes,
     'look for an edge much faster than the circuit around it, a missing resistance in a loop, or loosen `relative-tolerance`',

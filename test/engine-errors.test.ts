@@ -1,0 +1,55 @@
+import { describe, expect, it } from 'vitest';
+import { SimulationError } from '@voltcast/core';
+import { runText } from './support/run-text.ts';
+
+function failure(yaml: string): SimulationError {
+  try {
+    runText(yaml);
+  } catch (e) {
+    if (e instanceof SimulationError) return e;
+    throw e;
+  }
+  throw new Error('the run did not fail');
+}
+
+describe('unsolvable circuits are reported by cause', () => {
+  it('a node with no DC path to ground names the node and the capacitors around it', () => {
+    const e = failure(`
+circuit: floating
+parts:
+  V1: { voltage: 5, between: [in, gnd] }
+  C1: { capacitor: 1u, between: [in, mid] }
+  C2: { capacitor: 1u, between: [mid, gnd] }
+simulate: { duration: 1m }
+`);
+    expect(e.message).toBe('node mid has no DC path to gnd');
+    expect(e.nodes).toEqual(['mid']);
+    expect(e.parts).toEqual(['C1', 'C2']);
+    expect(Number.isNaN(e.time)).toBe(true);
+  });
+
+  it('a held capacitor gives that node its DC path', () => {
+    expect(() =>
+      runText(`
+circuit: held
+parts:
+  V1: { voltage: 5, between: [in, gnd] }
+  C1: { capacitor: 1u, between: [in, mid] }
+  C2: { capacitor: 1u, between: [mid, gnd], initial: 2 }
+simulate: { duration: 1m }
+`),
+    ).not.toThrow();
+  });
+
+  it('a loop of a source and an inductor names both parts', () => {
+    const e = failure(`
+circuit: loop
+parts:
+  V1: { voltage: 5, between: [a, gnd] }
+  L1: { inductor: 1m, between: [a, gnd] }
+simulate: { duration: 1m }
+`);
+    expect(e.parts).toEqual(['V1', 'L1']);
+    expect(e.message).toContain('loop');
+  });
+});
