@@ -12,7 +12,7 @@ let envelopeFile: string;
 const capture = (name: string) => join(repoRoot, 'fixtures', 'data', `moisture-capture-${name}.csv`);
 beforeAll(async () => {
   scratch = mkdtempSync(join(tmpdir(), 'voltcast-compare-'));
-  const { code } = await runCli(['envelope', join(repoRoot, 'fixtures', 'envelope-rc-filter.yaml'), '--runs', '24', '--seed', '5', '--out', join(scratch, 'env'), '--quiet']);
+  const { code } = await runCli(['envelope', join(repoRoot, 'fixtures', 'envelope-rc-filter.yaml'), '--corners', '--out', join(scratch, 'env'), '--quiet']);
   expect(code).toBe(0);
   envelopeFile = join(scratch, 'env', 'envelope.csv');
 }, 60_000);

@@ -17,6 +17,7 @@ const circuit = buildCircuit({
   },
   simulate: { duration: '3m', 'output-step': '5u' },
   probes: ['in', 'out'],
+  adc: { CONV: { input: 'out', bits: 8, range: [0, 3.3], rate: '20k' } },
 });
 
 /** Paths per `data-series` name, and every path in the document. */
@@ -25,20 +26,24 @@ function paths(svg: string): { all: number; series: string[] } {
 }
 
 describe('SVG plots', () => {
-  it('draw a run as well-formed XML with one path per probe', () => {
-    const svg = renderFigure(runFigure(circuit, 'invented <plot> & co.yaml', runCircuit(circuit).transient));
+  it('draw a run as well-formed XML with one path per probe and per ADC', () => {
+    const run = runCircuit(circuit);
+    const svg = renderFigure(runFigure(circuit, 'invented <plot> & co.yaml', run.transient, run.adcs));
     // Well-formedness per the XML 1.0 specification (checker in test/support).
     expect(xmlProblems(svg)).toEqual([]);
-    expect(paths(svg)).toEqual({ all: 2, series: ['in', 'out'] });
+    expect(paths(svg)).toEqual({ all: 3, series: ['in', 'out', 'CONV'] });
+    // Codes are held between conversions: the path moves horizontally then vertically.
+    const steps = /data-series="CONV"[^>]* d="([^"]*)"/.exec(svg)![1];
+    expect(steps).toMatch(/^M[\d.]+,([\d.]+)L([\d.]+),\1L\2,/);
     // The file name's < and & are escaped, not dropped (XML 1.0 section 2.4).
     expect(svg).toContain('invented &lt;plot&gt; &amp; co.yaml');
   });
 
-  it('draw an envelope as a band and a nominal path per probe', () => {
+  it('draw an envelope as a band and a nominal path per probe and per ADC', () => {
     const result = envelope(circuit, { corners: true });
     const svg = renderFigure(envelopeFigure(result, circuit.name, 'invented.yaml'));
     expect(xmlProblems(svg)).toEqual([]);
-    expect(paths(svg)).toEqual({ all: 4, series: ['in min..max', 'in nominal', 'out min..max', 'out nominal'] });
+    expect(paths(svg)).toEqual({ all: 6, series: ['in min..max', 'in nominal', 'out min..max', 'out nominal', 'CONV min..max', 'CONV nominal'] });
   });
 
   it('draw a comparison with its violations as one more path', () => {

@@ -1,16 +1,20 @@
 import { writeFileSync } from 'node:fs';
 import { join } from 'node:path';
-import { formatSI, type Circuit, type RunStats, type TransientResult } from '@voltcast/core';
+import { formatSI, type Circuit, type Findings, type TransientResult } from '@voltcast/core';
+import { findingsText } from './findings-text.ts';
 import type { ProbeExtremes } from './probe-extremes.ts';
 import { textTable } from './text-table.ts';
 
-/** What `report.json` holds. Every number is in SI base units (seconds, volts, amperes). */
-export interface RunReport {
+/**
+ * What `report.json` holds (docs/report-schema.md): the run's settings and extremes, then the
+ * findings of `runCircuit` (saturation, slew, current limit, ringing, ADC, warnings, stats).
+ * Every number is in SI base units (seconds, volts, amperes).
+ */
+export interface RunReport extends Findings {
   readonly circuit: string;
   /** The circuit file as given on the command line. */
   readonly file: string;
   readonly settings: Circuit['simulate'];
-  readonly stats: RunStats;
   /** Voltage of every named node at t = 0. */
   readonly operatingPoint: Record<string, number>;
   readonly probes: Record<string, { min: number; max: number; final: number }>;
@@ -25,14 +29,15 @@ export function buildReport(
   file: string,
   result: TransientResult,
   extremes: readonly ProbeExtremes[],
+  findings: Findings,
 ): RunReport {
   return {
     circuit: circuit.name,
     file,
     settings: circuit.simulate,
-    stats: result.stats,
     operatingPoint: Object.fromEntries(result.operatingPoint),
     probes: Object.fromEntries(extremes.map(({ probe, min, max, final }) => [probe, { min, max, final }])),
+    ...findings,
   };
 }
 
@@ -51,6 +56,8 @@ export function reportText(report: RunReport): string {
   const lines = [
     `voltcast run report: ${report.circuit}`,
     `file: ${report.file}`,
+    '',
+    ...findingsText(report),
     '',
     'settings',
     ...textTable([

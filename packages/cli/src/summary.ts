@@ -2,6 +2,7 @@ import { isAbsolute, relative, resolve } from 'node:path';
 import { formatSI, type Circuit } from '@voltcast/core';
 import { probeTable, type RunReport } from './report.ts';
 import { textTable } from './text-table.ts';
+import { topFindings } from './findings-text.ts';
 
 /** The one-screen summary printed on stdout after a successful run. */
 export function runSummary(report: RunReport, circuit: Circuit, wallSeconds: number, files: readonly string[]): string {
@@ -17,6 +18,8 @@ export function runSummary(report: RunReport, circuit: Circuit, wallSeconds: num
     ...files.map((file) => `  ${displayPath(file)}`),
     'probes',
     ...probeTable(report.probes, false),
+    'findings',
+    ...topFindings(report).map((line) => `  ${line}`),
   ];
   return lines.join('\n');
 }

@@ -68,4 +68,13 @@ describe('compare', () => {
     // The 150 µs at the start have no expected values after the shift: not compared.
     expect(given.skipped).toBe(Math.ceil(150e-6 / 7e-6));
   });
+
+  it('accepts a small delay within a time margin, and only then', () => {
+    const late = capture(4e-6);
+    expect(compare(late, limits).pass).toBe(false);
+    // Within ±5 µs each sample may meet any limit of that window: a 4 µs delay is covered...
+    expect(compare(late, limits, { timeMargin: 5e-6 }).pass).toBe(true);
+    // ...while ±3 µs leaves the 4 µs delay outside at the steepest edge.
+    expect(compare(late, limits, { timeMargin: 3e-6 }).pass).toBe(false);
+  });
 });

@@ -1,5 +1,6 @@
+import { writeFileSync } from 'node:fs';
 import { basename, extname, join } from 'node:path';
-import { simulate, type TransientResult } from '@voltcast/core';
+import { runCircuit, type CircuitRun } from '@voltcast/core';
 import { readCircuitFile } from '../read-circuit-file.ts';
 import { writeOutputDir } from '../output-dir.ts';
 import { WaveformCsv } from '../waveform-csv.ts';
@@ -7,12 +8,19 @@ import { ExtremesTracker } from '../probe-extremes.ts';
 import { buildReport, writeReport } from '../report.ts';
 import { RunProgress } from '../progress.ts';
 import { runSummary } from '../summary.ts';
+import { parseCodeFormats, writeAdcFiles } from '../adc-files.ts';
+import { renderFigure } from '../plot/render-figure.ts';
+import { runFigure } from '../plot/run-plot.ts';
 
 export interface RunOptions {
   /** Output folder; default `out/<circuit file base name>` in the current folder. */
   out?: string;
   /** No progress bar and no summary; warnings and errors still go to stderr. */
   quiet?: boolean;
+  /** Also write `plot.svg`: the waveforms and ADC codes (keeps the columns in memory). */
+  plot?: boolean;
+  /** Extra forms of the ADC codes, comma-separated: `c-header`, `json`. */
+  codesAs?: string;
 }
 
 /** `voltcast run FILE`: simulate, stream `waveforms.csv`, write the reports, print a summary. */
@@ -20,16 +28,17 @@ export function runCommand(file: string, options: RunOptions): void {
   const { circuit, fileName, warnings } = readCircuitFile(file);
   for (const warning of warnings) console.error(warning);
   const outDir = options.out ?? defaultOutDir(fileName);
+  const codeFormats = parseCodeFormats(options.codesAs ?? '');
   const progress = new RunProgress(circuit.simulate.duration, !options.quiet);
   const startedAt = performance.now();
 
   const { report, files } = writeOutputDir(outDir, (staging) => {
     const csv = new WaveformCsv(join(staging, 'waveforms.csv'), circuit.probes);
     const extremes = new ExtremesTracker(circuit.probes);
-    let result: TransientResult;
+    let run: CircuitRun;
     try {
-      result = simulate(circuit, {
-        keepColumns: false,
+      run = runCircuit(circuit, {
+        keepColumns: options.plot === true,
         onRow: (time, values) => {
           csv.row(time, values);
           extremes.add(values);
@@ -40,8 +49,13 @@ export function runCommand(file: string, options: RunOptions): void {
       progress.stop();
       csv.close();
     }
-    const report = buildReport(circuit, fileName, result, extremes.results());
-    const names = ['waveforms.csv', ...writeReport(staging, report).map((path) => basename(path))];
+    const report = buildReport(circuit, fileName, run.transient, extremes.results(), run.findings);
+    const adcFiles = writeAdcFiles(staging, circuit.name, run.adcs, codeFormats);
+    const names = ['waveforms.csv', ...adcFiles, ...writeReport(staging, report).map((path) => basename(path))];
+    if (options.plot) {
+      writeFileSync(join(staging, 'plot.svg'), renderFigure(runFigure(circuit, fileName, run.transient, run.adcs)));
+      names.push('plot.svg');
+    }
     return { report, files: names };
   });
 

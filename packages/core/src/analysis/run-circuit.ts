@@ -3,6 +3,8 @@ import type { SimulateOptions, TransientResult } from '../transient/result.ts';
 import { simulate } from '../transient/simulate.ts';
 import { AdcSampler } from './adc/adc-sampler.ts';
 import type { AdcReadout } from './adc/adc-readout.ts';
+import { FindingsWatch } from './report/findings.ts';
+import type { Findings, FindingsOptions } from './report/types.ts';
 
 /**
  * Everything one run of a circuit produces: the waveforms, and what the analyses made of
@@ -14,10 +16,15 @@ export interface CircuitRun {
   readonly transient: TransientResult;
   /** What each converter of the `adc:` section read, in the section's order. */
   readonly adcs: readonly AdcReadout[];
+  /** Saturation, slew, current-limit and ringing findings with the ADC reports (docs/report-schema.md). */
+  readonly findings: Findings;
 }
 
 /** Options for `runCircuit`: those of `simulate`, plus each analysis's own. */
-export interface RunOptions extends SimulateOptions {}
+export interface RunOptions extends SimulateOptions {
+  /** Thresholds of the saturation and ringing analyses. */
+  findings?: FindingsOptions;
+}
 
 /**
  * Simulate a circuit with every analysis it asks for. Analyses that need the exact solution
@@ -26,6 +33,8 @@ export interface RunOptions extends SimulateOptions {}
  */
 export function runCircuit(circuit: Circuit, options: RunOptions = {}): CircuitRun {
   const adcs = circuit.adcs.map((spec) => new AdcSampler(spec, circuit.simulate.duration));
-  const transient = simulate(circuit, { ...options, observers: [...(options.observers ?? []), ...adcs] });
-  return { circuit, transient, adcs: adcs.map((adc) => adc.readout()) };
+  const watch = new FindingsWatch(circuit, options.findings);
+  const transient = simulate(circuit, { ...options, observers: [...(options.observers ?? []), ...adcs, ...watch.observers] });
+  const run = { circuit, transient, adcs: adcs.map((adc) => adc.readout()) };
+  return { ...run, findings: watch.finish(transient, run.adcs.map((adc) => adc.report)) };
 }

@@ -189,6 +189,14 @@ class OpampDevice implements Device {
   /** Normalized arguments at which the last Newton iteration linearized the input stage and the output limit. */
   private uLast = 0;
   private wLast = 0;
+  private readonly current: { -readonly [K in keyof OpampStatus]: OpampStatus[K] } & { limits: [number, number] } = {
+    rail: 0,
+    slewing: false,
+    currentLimited: false,
+    inputError: 0,
+    output: 0,
+    limits: [0, 0],
+  };
 
   constructor(readonly spec: OpampSpec) {
     this.name = spec.name;
@@ -271,8 +279,7 @@ class OpampDevice implements Device {
   private stampClamp(m: Mna, x: Float64Array): void {
     const region = this.region(x);
     if (region === 0) return;
-    const [lowRail, highRail] = this.spec.supply!;
-    const rail = region > 0 ? highRail : lowRail;
+    const rail = this.spec.supply![region > 0 ? 1 : 0];
     const node = region > 0 ? this.high : this.low;
     const headroom = this.spec.parameters.headroom[region > 0 ? 1 : 0] * region;
     // i = gClamp·(v1 - (v(rail) - headroom)) leaves n1.
@@ -311,18 +318,19 @@ class OpampDevice implements Device {
     return volts - side * this.spec.parameters.headroom[side > 0 ? 1 : 0];
   }
 
+  /** Status at solution `x`. Observers call this every step, so the object is reused: read it before the next call. */
   status(x: Float64Array): OpampStatus {
     const q = this.spec.parameters;
-    const inputError = across(x, this.p, this.m) + q.offset;
+    const s = this.current;
+    s.inputError = across(x, this.p, this.m) + q.offset;
     const outputCurrent = q.currentLimit !== undefined ? Math.abs(Math.tanh(across(x, this.drive, this.out) / (q.rout * q.currentLimit))) : 0;
-    return {
-      rail: this.region(x) as -1 | 0 | 1,
-      slewing: Math.abs(Math.tanh((this.gm * inputError) / this.imax)) > 0.9,
-      currentLimited: outputCurrent > 0.9,
-      inputError,
-      output: this.out >= 0 ? x[this.out] : 0,
-      limits: [this.limit(x, -1), this.limit(x, 1)],
-    };
+    s.rail = this.region(x) as -1 | 0 | 1;
+    s.slewing = Math.abs(Math.tanh((this.gm * s.inputError) / this.imax)) > 0.9;
+    s.currentLimited = outputCurrent > 0.9;
+    s.output = this.out >= 0 ? x[this.out] : 0;
+    s.limits[0] = this.limit(x, -1);
+    s.limits[1] = this.limit(x, 1);
+    return s;
   }
 
   accept(x: Float64Array, step: StepInfo): void {

@@ -63,8 +63,12 @@ export class TruncationError {
    */
   ratio(t: number, x: Float64Array, order: 1 | 2, worst?: { index: number }): number {
     if (this.count < order + 1) return 0;
-    const [t0, t1, t2] = this.times;
-    const [x0, x1, x2] = this.points;
+    const t0 = this.times[0];
+    const t1 = this.times[1];
+    const t2 = this.times[2];
+    const x0 = this.points[0];
+    const x1 = this.points[1];
+    const x2 = this.points[2];
     const h = t - t0;
     const h1 = t0 - t1;
     let factor: number;

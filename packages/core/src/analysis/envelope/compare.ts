@@ -71,6 +71,7 @@ export function compare(measured: Trace, envelope: EnvelopeTrace, options: Compa
   let compared = 0;
   let skipped = 0;
   let row = 0;
+  const limits = { min: 0, max: 0 };
   for (let i = 0; i < measured.time.length; i++) {
     const t = measured.time[i] - shift;
     const value = measured.values[i];
@@ -81,8 +82,8 @@ export function compare(measured: Trace, envelope: EnvelopeTrace, options: Compa
     compared++;
     if (et[row] > t) row = 0;
     while (row < et.length - 2 && et[row + 1] <= t) row++;
-    const { min, max } = limitsAround(envelope, row, t, timeMargin);
-    if (value < min - margin || value > max + margin) violations.push({ time: measured.time[i], envelopeTime: t, value, min: min - margin, max: max + margin });
+    limitsAround(envelope, row, t, timeMargin, limits);
+    if (value < limits.min - margin || value > limits.max + margin) violations.push({ time: measured.time[i], envelopeTime: t, value, min: limits.min - margin, max: limits.max + margin });
   }
   const inside = compared - violations.length;
   return {
@@ -97,17 +98,33 @@ export function compare(measured: Trace, envelope: EnvelopeTrace, options: Compa
   };
 }
 
-/** Limits at t (interpolated in row r..r+1), widened to every row within ± timeMargin. */
-function limitsAround(envelope: EnvelopeTrace, r: number, t: number, timeMargin: number): { min: number; max: number } {
+/**
+ * Limits at t, into `out`. With a time margin, the lowest min and highest max over
+ * [t - timeMargin, t + timeMargin]: the limits are linear between rows, so those extremes lie
+ * at the window's two ends or at a row inside it.
+ */
+function limitsAround(envelope: EnvelopeTrace, r: number, t: number, timeMargin: number, out: { min: number; max: number }): void {
   const { time, min, max } = envelope;
+  out.min = interpolate(time, min, r, t);
+  out.max = interpolate(time, max, r, t);
+  if (timeMargin <= 0) return;
   const last = time.length - 1;
-  const f = last === 0 || time[r + 1] === time[r] ? 0 : Math.min(1, Math.max(0, (t - time[r]) / (time[r + 1] - time[r])));
-  const next = Math.min(r + 1, last);
-  let low = min[r] + f * (min[next] - min[r]);
-  let high = max[r] + f * (max[next] - max[r]);
-  if (timeMargin > 0) {
-    for (let k = r; k >= 0 && time[k] >= t - timeMargin; k--) (low = Math.min(low, min[k])), (high = Math.max(high, max[k]));
-    for (let k = r + 1; k <= last && time[k] <= t + timeMargin; k++) (low = Math.min(low, min[k])), (high = Math.max(high, max[k]));
-  }
-  return { min: low, max: high };
+  let k = r;
+  for (; k > 0 && time[k] > t - timeMargin; k--) (out.min = Math.min(out.min, min[k])), (out.max = Math.max(out.max, max[k]));
+  const early = Math.max(time[0], t - timeMargin);
+  out.min = Math.min(out.min, interpolate(time, min, k, early));
+  out.max = Math.max(out.max, interpolate(time, max, k, early));
+  for (k = r + 1; k < last && time[k] < t + timeMargin; k++) (out.min = Math.min(out.min, min[k])), (out.max = Math.max(out.max, max[k]));
+  const late = Math.min(time[last], t + timeMargin);
+  const row = Math.max(0, Math.min(k, last) - 1);
+  out.min = Math.min(out.min, interpolate(time, min, row, late));
+  out.max = Math.max(out.max, interpolate(time, max, row, late));
+}
+
+/** values at t, linear between row r and r + 1 (t within them, or clamped to them). */
+function interpolate(time: ArrayLike<number>, values: ArrayLike<number>, r: number, t: number): number {
+  const next = Math.min(r + 1, time.length - 1);
+  if (next === r || time[next] === time[r]) return values[r];
+  const f = Math.min(1, Math.max(0, (t - time[r]) / (time[next] - time[r])));
+  return values[r] + f * (values[next] - values[r]);
 }

@@ -1,5 +1,5 @@
 import type { Circuit } from '../../circuit/circuit.ts';
-import { runCircuit, type CircuitRun, type RunOptions } from '../run-circuit.ts';
+import { runCircuit, type CircuitRun } from '../run-circuit.ts';
 import { SimulationError } from '../../transient/simulation-error.ts';
 import { cornerCount, cornerDeviations } from './corners.ts';
 import { RunDraws } from './draws.ts';
@@ -91,13 +91,13 @@ export function* planVariants(plan: EnvelopePlan, from: number, end: number): Ge
  * Run variants `from` to `end - 1` and fold them. A failed run throws a SimulationError whose
  * message names the variant and the values it drew, so the failure can be reproduced.
  */
-export function runVariants(plan: EnvelopePlan, from: number, end: number, options: RunOptions = {}, onRun?: () => void): EnvelopeBounds {
+export function runVariants(plan: EnvelopePlan, from: number, end: number, onRun?: () => void): EnvelopeBounds {
   const probes = plan.circuit.probes;
   let fold: EnvelopeFold | undefined;
   for (const variant of planVariants(plan, from, end)) {
     let run: CircuitRun;
     try {
-      run = runCircuit(variant.circuit, options);
+      run = runCircuit(variant.circuit);
     } catch (error) {
       if (!(error instanceof SimulationError)) throw error;
       throw new SimulationError(`${describeVariant(plan, variant.index, variant.deviations)}: ${error.message}`, error.time, error.nodes, error.hint, error.parts);
@@ -152,6 +152,6 @@ export function envelope(circuit: Circuit, options: EnvelopeOptions = {}): Envel
   const plan = envelopePlan(circuit, options);
   const nominal = runCircuit(circuit);
   let done = 0;
-  const variants = runVariants(plan, 0, plan.variants, {}, () => options.onProgress?.(++done, plan.variants));
+  const variants = runVariants(plan, 0, plan.variants, () => options.onProgress?.(++done, plan.variants));
   return assembleEnvelope(plan, nominal, variants);
 }

@@ -32,7 +32,7 @@ export function findRinging(
   events: readonly RingingEvent[],
   outputStep: number,
   options: RingingOptions = {},
-): { ringing: RingingFinding[]; warnings: ReportWarning[] } {
+): { ringing: RingingFinding[]; warnings: ReportWarning[]; events: number } {
   const settleBand = options.settleBand ?? 0.01;
   const sustainedBelow = options.sustainedBelow ?? 0.01;
   const tolerance = options.spectralTolerance ?? 0.15;
@@ -57,7 +57,9 @@ export function findRinging(
     clusters.forEach((cluster, c) => {
       const i0 = rowAtOrAfter(cluster.last);
       const i1 = c + 1 < clusters.length ? Math.min(rows, rowAtOrAfter(clusters[c + 1].first) + 1) : rows;
-      const iBefore = Math.max(0, Math.min(rowAtOrAfter(cluster.first), rows - 1));
+      // The last row at or before the event's first corner: the value before the event.
+      const atFirst = Math.min(rowAtOrAfter(cluster.first), rows - 1);
+      const iBefore = time[atFirst] > cluster.first + outputStep * 1e-6 ? Math.max(0, atFirst - 1) : atFirst;
       const found = measureOscillation(time, values, i0, i1, values[iBefore], cluster.last, settleBand);
       if (found === null) return;
       const rowsPerPeriod = 1 / (found.frequency * outputStep);
@@ -97,5 +99,5 @@ export function findRinging(
     });
   }
   ringing.sort((a, b) => a.start - b.start || a.node.localeCompare(b.node));
-  return { ringing, warnings };
+  return { ringing, warnings, events: clusters.length };
 }

@@ -61,7 +61,8 @@ export function measureOscillation(
   let deviation = 0;
   for (let i = i0; i < i1; i++) deviation = Math.max(deviation, Math.abs(values[i] - center));
   const reference = (c: number): number => (Math.abs(c - before) > 1e-3 * deviation ? Math.abs(c - before) : deviation);
-  const hysteresis = (c: number): number => Math.max(0.25 * settleBand * reference(c), 1e-9);
+  const noise = noiseLevel(values, tailFrom, i1);
+  const hysteresis = (c: number): number => Math.max(0.25 * settleBand * reference(c), 4 * noise, 1e-9);
 
   let lobes = findLobes(time, values, i0, i1, center, hysteresis(center));
   if (lobes.crossings.length < MIN_CROSSINGS) return null;
@@ -115,6 +116,22 @@ export function measureOscillation(
     from: lobes.crossingRows[0],
     to: lobes.crossingRows[lobes.crossingRows.length - 1],
   };
+}
+
+/**
+ * Standard deviation of white noise on rows [from, to), from their second differences: for
+ * white noise the variance of v[i+1] - 2 v[i] + v[i-1] is 6 sigma^2, while a smooth signal (or
+ * an oscillation sampled at many rows per period) contributes almost nothing to them.
+ */
+function noiseLevel(values: Float64Array, from: number, to: number): number {
+  let sum = 0;
+  let n = 0;
+  for (let i = from + 1; i < to - 1; i++) {
+    const d2 = values[i + 1] - 2 * values[i] + values[i - 1];
+    sum += d2 * d2;
+    n++;
+  }
+  return n > 0 ? Math.sqrt(sum / n / 6) : 0;
 }
 
 /**

@@ -23,6 +23,8 @@ export class TwoStepGuard implements StepObserver {
     private readonly nodes: readonly string[],
     /** Differences below this (volts) are rounding, not a zig-zag. */
     private readonly floor = 1e-6,
+    /** Plus this fraction of the value: a zig-zag of microvolts on a rail is no news. */
+    private readonly relativeFloor = 1e-5,
   ) {}
 
   bind(context: ObserverContext): void {
@@ -36,7 +38,7 @@ export class TwoStepGuard implements StepObserver {
     for (let i = 0; i < this.indices.length; i++) {
       const v = this.indices[i] >= 0 ? x[this.indices[i]] : 0;
       const diff = v - this.previous[i];
-      const alternates = Math.abs(diff) > this.floor && diff * this.lastDiff[i] < 0;
+      const alternates = Math.abs(diff) > this.floor + this.relativeFloor * Math.abs(v) && diff * this.lastDiff[i] < 0;
       this.runs[i] = alternates ? this.runs[i] + 1 : 0;
       if (this.runs[i] === ALTERNATIONS && !this.flagged.has(i)) {
         this.flagged.add(i);
