@@ -7,9 +7,9 @@ import { repoRoot, runCli } from './support/run-cli.ts';
 // End-to-end runs of the fixtures through the real engine. Durations and steps below are
 // those written in the fixture files (checked here independently of the CLI's own report).
 const fixtures = [
-  { file: 'demo-strain-front-end.yaml', probes: ['beam', 'filt', 'adc'], duration: 24e-3, outputStep: 10e-6 },
-  { file: 'supply-ringing.yaml', probes: ['feed', 'rail'], duration: 500e-6, outputStep: 500e-9 },
-  { file: 'sensor-cable-rl.yaml', probes: ['drive', 'probe'], duration: 100e-6, outputStep: 100e-9 },
+  { file: 'demo-strain-front-end.yaml', probes: ['beam', 'amp', 'adc'], duration: 24e-3, outputStep: 10e-6, files: ['adc-TRAY.csv'] },
+  { file: 'supply-ringing.yaml', probes: ['feed', 'rail'], duration: 500e-6, outputStep: 500e-9, files: [] },
+  { file: 'sensor-cable-rl.yaml', probes: ['drive', 'probe'], duration: 100e-6, outputStep: 100e-9, files: [] },
 ];
 
 let scratch: string;
@@ -20,13 +20,13 @@ afterEach(() => {
   rmSync(scratch, { recursive: true, force: true });
 });
 
-describe.each(fixtures)('voltcast run fixtures/$file', ({ file, probes, duration, outputStep }) => {
+describe.each(fixtures)('voltcast run fixtures/$file', ({ file, probes, duration, outputStep, files }) => {
   test('writes waveforms.csv on the output grid and report.json with the run counters', async () => {
     const out = join(scratch, 'result');
     const { code, stdout, stderr } = await runCli(['run', join(repoRoot, 'fixtures', file), '--out', out]);
     expect(stderr).toBe('');
     expect(code).toBe(0);
-    expect(readdirSync(out).sort()).toEqual(['report.json', 'report.txt', 'waveforms.csv']);
+    expect(readdirSync(out).sort()).toEqual([...files, 'report.json', 'report.txt', 'waveforms.csv'].sort());
     expect(readdirSync(scratch)).toEqual(['result']); // the staging folder is gone
 
     const lines = readFileSync(join(out, 'waveforms.csv'), 'utf8').trimEnd().split('\n');

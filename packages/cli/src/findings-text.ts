@@ -1,4 +1,4 @@
-import { formatSI, type Findings } from '@voltcast/core';
+import { formatSI, type AdcReport, type CodeError, type Findings } from '@voltcast/core';
 
 /** One line of the timeline: when, what kind, on which part or node, the figures, and a hint. */
 interface Entry {
@@ -55,6 +55,8 @@ export function topFindings(findings: Findings, count = 5): string[] {
   for (const c of findings.currentLimit) add(`${c.part} at its output current limit`, c.start, c.duration);
   for (const [what, g] of groups) lines.push(`${what} ${g.count} time${g.count > 1 ? 's' : ''}, ${seconds(g.total)} in all, first at ${seconds(g.first)}`);
   for (const a of findings.adc) {
+    const starved = acquisitionShortfall(a);
+    if (starved !== undefined) lines.push(`ADC ${a.name} reads up to ${Math.abs(starved.codes)} codes off the input: acquisition too short for the source`);
     const clipped = a.clippedLow.count + a.clippedHigh.count;
     if (clipped > 0) lines.push(`ADC ${a.name}: ${clipped} clipped sample${clipped > 1 ? 's' : ''} (${a.clippedLow.count} low, ${a.clippedHigh.count} high)`);
   }
@@ -64,6 +66,16 @@ export function topFindings(findings: Findings, count = 5): string[] {
   if (more > 0) shown.push(`${more} more in report.txt`);
   if (findings.warnings.length > 0) shown.push(`${findings.warnings.length} warning${findings.warnings.length > 1 ? 's' : ''} in report.txt`);
   return shown;
+}
+
+/**
+ * A converter whose sampling capacitor has not settled to within 1/2 LSB of its input at the
+ * sample instant (common practice settling criterion), with its worst error against the
+ * input as it stood before the window. A moving signal alone does not count: the held value
+ * then still matches the input at the instant.
+ */
+function acquisitionShortfall(a: AdcReport): CodeError | undefined {
+  return a.largestHeldError > a.lsb / 2 ? a.largestErrorBeforeWindow : undefined;
 }
 
 function timeline(findings: Findings): Entry[] {
@@ -91,6 +103,14 @@ function timeline(findings: Findings): Entry[] {
     entries.push({ time: r.start, cells: [seconds(r.start), '', 'ringing', r.node, `${figures} (after ${r.cause}${again})`], hint: r.hint?.text });
   }
   for (const a of findings.adc) {
+    const starved = acquisitionShortfall(a);
+    if (starved !== undefined) {
+      entries.push({
+        time: starved.time,
+        cells: [seconds(starved.time), '', 'ADC acquisition', a.name, `held value ${(a.largestHeldError / a.lsb).toFixed(1)} LSB short of the input at the instant; read ${starved.read} where the input stood at ${starved.ideal} before the window (${starved.codes > 0 ? '+' : ''}${starved.codes} codes)`],
+        hint: `${a.name}'s sampling capacitor does not settle from the source within the acquisition window. Lengthen the window to at least R·C·ln(2^(N+1)) of the source and switch resistance, buffer the input with a follower, or put a reservoir capacitor at the pin much larger than the sampling capacitor (common practice).`,
+      });
+    }
     for (const [side, clipped] of [['low', a.clippedLow], ['high', a.clippedHigh]] as const) {
       for (const i of clipped.intervals) entries.push({ time: i.from, cells: [seconds(i.from), seconds(i.to), `ADC clipped ${side}`, a.name, `input beyond the ${side} end of the range`] });
     }

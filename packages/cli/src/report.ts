@@ -2,6 +2,7 @@ import { writeFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { formatSI, type Circuit, type Findings, type TransientResult } from '@voltcast/core';
 import { findingsText } from './findings-text.ts';
+import { adcText } from './adc-text.ts';
 import type { ProbeExtremes } from './probe-extremes.ts';
 import { textTable } from './text-table.ts';
 
@@ -58,6 +59,7 @@ export function reportText(report: RunReport): string {
     `file: ${report.file}`,
     '',
     ...findingsText(report),
+    ...adcText(report.adc),
     '',
     'settings',
     ...textTable([

@@ -84,9 +84,9 @@ describe('errors say what, where and what to do', () => {
   });
 
   it('an unknown key with nothing near lists the known keys', () => {
-    const issue = only(`${filter}adc: {}\n`);
-    expect(issue.message).toBe("unknown key 'adc'");
-    expect(issue.hint).toBe('keys known here: circuit, parts, simulate, probes');
+    const issue = only(`${filter}zzz: {}\n`);
+    expect(issue.message).toBe("unknown key 'zzz'");
+    expect(issue.hint).toBe('keys known here: circuit, parts, simulate, probes, adc');
   });
 
   it('a duplicate part name points at the second one and names the first', () => {

@@ -5,8 +5,9 @@ const rowHeight = 16;
 
 /** A key to a panel's series at its top right: a swatch (never a path) and the name. */
 export function legend(series: readonly Series[], colours: readonly string[], right: number, top: number): string {
-  const width = 14 + 7 * Math.max(...series.map((s) => s.name.length));
-  const left = right - width - 12;
+  // Room for the swatch, then about 6.6 px per character of an 11 px sans-serif face.
+  const width = 34 + 6.6 * Math.max(...series.map((s) => s.name.length));
+  const left = right - width - 6;
   const rows = series.map((s, i) => {
     const y = top + 10 + i * rowHeight;
     const swatch =
@@ -17,6 +18,6 @@ export function legend(series: readonly Series[], colours: readonly string[], ri
           : element('line', { x1: left + 6, x2: left + 20, y1: y, y2: y, stroke: colours[i], 'stroke-width': 2, 'stroke-dasharray': s.kind === 'line' && s.dashed ? '5 3' : undefined });
     return swatch + text(left + 26, y + 4, s.name);
   });
-  const box = element('rect', { x: left, y: top, width: width + 12, height: series.length * rowHeight + 4, fill: 'white', 'fill-opacity': 0.85, stroke: '#cccccc' });
+  const box = element('rect', { x: left, y: top, width, height: series.length * rowHeight + 4, fill: 'white', 'fill-opacity': 0.85, stroke: '#cccccc' });
   return element('g', { class: 'legend', 'font-size': 11, fill: '#333333' }, box, ...rows);
 }

@@ -132,9 +132,10 @@ export function nextEdge(schedule: SwitchSchedule, t: number): number {
 }
 
 /**
- * A resistance that steps between two values on a schedule. Its conductance depends on
- * time only, so it is stamped per solve (the Newton layer), evaluated in the middle of the
- * step; the equations refactor only when the state actually changes.
+ * A resistance that steps between two values on a schedule. Its conductance changes only at
+ * its edges, which are corners: the stepper lands on them and rebuilds the step layer of the
+ * matrix after each, so the switch stamps there, evaluated in the middle of the step. The
+ * circuit stays linear: one solve per step, one factorization per state and step size.
  */
 class SwitchDevice implements Device {
   readonly kind = 'switch';
@@ -154,11 +155,10 @@ class SwitchDevice implements Device {
     this.a = binder.node(nodeOf(this.spec.pins, 'a'));
     this.b = binder.node(nodeOf(this.spec.pins, 'b'));
   }
-  stampNewton(m: Mna, _x: Float64Array, step: StepInfo): boolean {
+  stampStep(m: Mna, step: StepInfo): void {
     const when = step.method === 'dc' ? this.beforeStart : step.t - step.h / 2;
     const closed = isClosed(this.spec.schedule, when);
     stampConductance(m, this.a, this.b, 1 / (closed ? this.spec.onResistance : this.spec.offResistance));
-    return false;
   }
   nextCorner(t: number): number {
     return nextEdge(this.spec.schedule, t);

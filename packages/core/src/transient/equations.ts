@@ -67,8 +67,9 @@ export class Equations {
     this.staticMatrix.set(this.mna.matrix);
   }
 
-  get isNonlinear(): boolean {
-    return this.nonlinear.length > 0;
+  /** Rebuild the step layer before the next solve: called after every corner. */
+  invalidateStep(): void {
+    this.stepH = NaN;
   }
 
   /**

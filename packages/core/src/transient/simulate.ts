@@ -190,7 +190,10 @@ export function simulate(circuit: Circuit, options: SimulateOptions = {}): Trans
     if (event || t >= corner - eps) {
       error.restart(t, x);
       sinceCorner = 0;
-      if (t >= corner - eps) corner = equations.nextCorner(t + eps);
+      if (t >= corner - eps) {
+        corner = equations.nextCorner(t + eps);
+        equations.invalidateStep();
+      }
     } else {
       error.push(t, x);
     }

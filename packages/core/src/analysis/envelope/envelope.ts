@@ -92,7 +92,6 @@ export function* planVariants(plan: EnvelopePlan, from: number, end: number): Ge
  * message names the variant and the values it drew, so the failure can be reproduced.
  */
 export function runVariants(plan: EnvelopePlan, from: number, end: number, onRun?: () => void): EnvelopeBounds {
-  const probes = plan.circuit.probes;
   let fold: EnvelopeFold | undefined;
   for (const variant of planVariants(plan, from, end)) {
     let run: CircuitRun;
@@ -114,7 +113,7 @@ export function foldFor(plan: EnvelopePlan, run: CircuitRun): EnvelopeFold {
   return new EnvelopeFold(plan.circuit.probes, run.transient.time.length, run.adcs.map((adc) => adc.code.length));
 }
 
-/** "Monte Carlo run 17 (R1 resistor -0.43, ...)", for failure messages. */
+/** "Monte Carlo run 17 (seed 1), R1.resistor at -43.0% of its tolerance, ...", for failure messages. */
 export function describeVariant(plan: EnvelopePlan, index: number, deviations: ArrayLike<number>): string {
   const what = index < plan.runs ? `Monte Carlo run ${index} (seed ${plan.seed})` : `corner ${index - plan.runs}`;
   const values = plan.slots.map((s, i) => `${s.part}.${s.tolerance.key} at ${(deviations[i] * 100).toFixed(1)}% of its tolerance`);

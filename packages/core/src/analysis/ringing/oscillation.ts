@@ -1,3 +1,5 @@
+/** Smallest swing about the settling value that counts, volts. */
+const MIN_SWING = 1e-6;
 /** Fewest rows after an event worth examining. */
 const MIN_ROWS = 16;
 /** Fewest zero crossings that make an oscillation (two full lobes between them). */
@@ -62,7 +64,8 @@ export function measureOscillation(
   for (let i = i0; i < i1; i++) deviation = Math.max(deviation, Math.abs(values[i] - center));
   const reference = (c: number): number => (Math.abs(c - before) > 1e-3 * deviation ? Math.abs(c - before) : deviation);
   const noise = noiseLevel(values, tailFrom, i1);
-  const hysteresis = (c: number): number => Math.max(0.25 * settleBand * reference(c), 4 * noise, 1e-9);
+  // Swings under a microvolt (the solver's default voltage tolerance) are no finding.
+  const hysteresis = (c: number): number => Math.max(0.25 * settleBand * reference(c), 4 * noise, MIN_SWING);
 
   let lobes = findLobes(time, values, i0, i1, center, hysteresis(center));
   if (lobes.crossings.length < MIN_CROSSINGS) return null;
