@@ -1,19 +1,12 @@
 import { describe, expect, it } from 'vitest';
 import { Matrix, solve } from 'ml-matrix';
 import { LuSolver } from '../src/solver/lu.ts';
+import { uniformNoise } from './support/lcg.ts';
 
-/** Small deterministic generator (a linear congruential generator, Numerical Recipes constants). */
-function generator(seed: number): () => number {
-  let s = seed >>> 0;
-  return () => {
-    s = (Math.imul(s, 1664525) + 1013904223) >>> 0;
-    return s / 2 ** 32 - 0.5;
-  };
-}
 
 describe('in-place LU against ml-matrix (reference library from the npm registry)', () => {
   it.each([2, 5, 12, 40])('solves random %i×%i systems like ml-matrix within 1e-10', (n) => {
-    const random = generator(n);
+    const random = uniformNoise(n);
     const a = Float64Array.from({ length: n * n }, random);
     const b = Float64Array.from({ length: n }, random);
     const lu = new LuSolver(n);

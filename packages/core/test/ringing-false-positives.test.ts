@@ -1,16 +1,9 @@
 import { describe, expect, it } from 'vitest';
 import { findRinging, parseCircuit, runCircuit, type Findings } from '../src/index.ts';
+import { uniformNoise } from './support/lcg.ts';
 
 const findingsOf = (yaml: string): Findings => runCircuit(parseCircuit(yaml, { fileName: 'inline.yaml' })).findings;
 
-/** A small linear congruential generator (constants from Numerical Recipes, from memory): seeded, repeatable noise. */
-function uniformNoise(seed: number): () => number {
-  let state = seed >>> 0;
-  return () => {
-    state = (Math.imul(state, 1664525) + 1013904223) >>> 0;
-    return state / 2 ** 32 - 0.5;
-  };
-}
 
 describe('no ringing where there is none', () => {
   it('a well-damped first-order RC driven by a square wave', () => {
