@@ -56,7 +56,7 @@ describe('bad circuit files exit 2 with file:line:column, a hint, and no output'
       at: 'outptu-step',
       says: /did you mean.*output-step/i,
     },
-    { name: 'a multiplier word that is not an SI prefix', text: good.replace('1k', '10meg'), at: '10meg', says: /10meg/ },
+    { name: 'a multiplier word that is not an SI prefix', text: good.replace('1k', '10kilo'), at: '10kilo', says: /10kilo/ },
     {
       name: 'points whose times do not increase',
       text: good.replace('voltage: 1,', 'voltage: { points: [[0, 0], [2m, 1], [1m, 2]] },'),
@@ -184,9 +184,9 @@ describe('voltcast check', () => {
   test('a bad file exits 2 with the position', async (context) => {
     const scratch = scratchFor(context);
     const file = join(scratch, 'bad.yaml');
-    const text = good.replace('1k', '10meg');
+    const text = good.replace('1k', '10kilo');
     writeFileSync(file, text);
-    const { line, column } = positionOf(text, '10meg');
+    const { line, column } = positionOf(text, '10kilo');
     const { code, stderr } = await runCli(['check', file]);
     expect(code).toBe(2);
     expect(stderr).toContain(`${file}:${line}:${column}: error: `);

@@ -118,8 +118,8 @@ describe('errors say what, where and what to do', () => {
   });
 
   it('a value that is not a number of the right quantity shows what is valid', () => {
-    const issue = only(withLine(filter, 4, '  R1:  { resistor: 10meg, between: [in, out] }'));
-    expect(issue.message).toBe("'10meg' is not a resistance");
+    const issue = only(withLine(filter, 4, '  R1:  { resistor: 10kilo, between: [in, out] }'));
+    expect(issue.message).toBe("'10kilo' is not a resistance");
     expect(issue.hint).toMatch(/like 10M or 4\.7kΩ$/);
     expect(issue.position).toEqual({ line: 4, column: 20 });
   });
@@ -202,12 +202,12 @@ describe('errors say what, where and what to do', () => {
 describe('parseCircuit and buildCircuit', () => {
   it('parseCircuit throws a CircuitError carrying every issue and the file name', () => {
     try {
-      parseCircuit(withLine(filter, 4, '  R1:  { resistor: 10meg, between: [in, out] }'), { fileName: 'filter.yaml' });
+      parseCircuit(withLine(filter, 4, '  R1:  { resistor: 10kilo, between: [in, out] }'), { fileName: 'filter.yaml' });
       expect.unreachable();
     } catch (error) {
       expect(error).toBeInstanceOf(CircuitError);
       expect((error as CircuitError).issues).toHaveLength(1);
-      expect((error as CircuitError).message).toMatch(/^filter\.yaml:4:20: error: '10meg' is not a resistance \(part R1\) at parts\.R1\.resistor/);
+      expect((error as CircuitError).message).toMatch(/^filter\.yaml:4:20: error: '10kilo' is not a resistance \(part R1\) at parts\.R1\.resistor/);
     }
   });
 
@@ -229,11 +229,11 @@ describe('parseCircuit and buildCircuit', () => {
 
   it('buildCircuit errors carry key paths and part names, without positions', () => {
     try {
-      buildCircuit({ circuit: 'x', parts: { RA: { resistor: '10meg', between: ['a', 'gnd'] } }, simulate: { duration: 1 } });
+      buildCircuit({ circuit: 'x', parts: { RA: { resistor: '10kilo', between: ['a', 'gnd'] } }, simulate: { duration: 1 } });
       expect.unreachable();
     } catch (error) {
       const issues = (error as CircuitError).issues.filter((issue) => issue.severity === 'error');
-      expect(issues).toMatchObject([{ path: ['parts', 'RA', 'resistor'], part: 'RA', message: "'10meg' is not a resistance" }]);
+      expect(issues).toMatchObject([{ path: ['parts', 'RA', 'resistor'], part: 'RA', message: "'10kilo' is not a resistance" }]);
       expect(issues[0].position).toBeUndefined();
     }
   });

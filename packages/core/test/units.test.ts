@@ -72,7 +72,7 @@ describe('parseQuantity accepts the contract notation', () => {
 });
 
 const invalid: [string | number, Quantity, RegExp][] = [
-  ['10meg', q.resistance, /'10meg' is not a resistance$/],
+  ['10kilo', q.resistance, /'10kilo' is not a resistance$/],
   ['10F', q.resistance, /F is a unit of capacitance/],
   ['10K', q.resistance, /kilo is a lowercase k/],
   ['5mV', q.time, /V is a unit of voltage/],
@@ -99,7 +99,7 @@ describe('parseQuantity rejects everything else and says what is valid', () => {
   });
 
   it('gives an example in the quantity\'s unit', () => {
-    expect((parseQuantity('10meg', q.resistance) as { hint: string }).hint).toMatch(/like 10M or 4\.7kΩ$/);
+    expect((parseQuantity('10kilo', q.resistance) as { hint: string }).hint).toMatch(/like 10M or 4\.7kΩ$/);
     expect((parseQuantity('fast', q.slewRate) as { hint: string }).hint).toMatch(/13V\/us/);
   });
 });
