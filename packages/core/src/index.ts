@@ -36,6 +36,7 @@ export type { Findings, FindingsOptions, FindingsStats, Hint, StageShape } from 
 export { SaturationTracker } from './analysis/saturation/index.ts';
 export type { SaturationFindings, SaturationOptions, SaturationInterval, SlewInterval, CurrentLimitInterval, Interval } from './analysis/saturation/index.ts';
 export { findRinging, measureOscillation, spectralPeak, stimulusCorners, RowRecorder, TwoStepGuard } from './analysis/ringing/index.ts';
+export type { Oscillation } from './analysis/ringing/index.ts';
 export type { RingingFinding, RingingOptions, RingingEvent, ReportWarning, RowWaveforms } from './analysis/ringing/index.ts';
 export type { TransientResult, RunStats, SimulateOptions } from './transient/result.ts';
 export { SimulationError } from './transient/simulation-error.ts';
@@ -47,3 +48,4 @@ export type { SwitchSpec, SwitchSchedule } from './parts/switch.ts';
 export { envelope, envelopePlan, planVariants, runVariants, assembleEnvelope, describeVariant, EnvelopeFold, foldFor, toleranceSlots, variedCircuit, compare, estimateDelay } from './analysis/envelope/index.ts';
 export type { Envelope, AdcEnvelope, EnvelopeOptions, EnvelopePlan, EnvelopeBounds, ToleranceSlot, Trace, EnvelopeTrace, CompareOptions, Comparison, Violation } from './analysis/envelope/index.ts';
 export type { Tolerance, TolerableValue, Distribution } from './parts/tolerance.ts';
+export { distributions } from './parts/tolerance.ts';
