@@ -120,6 +120,33 @@ probes: [fout, iout]
     expect(Math.abs(column(result, 'iout')[0] / (10 * 2e-3) - 1)).toBeLessThan(0.01);
   });
 
+  it('a comparator with hysteresis starts on its stable rail and switches at +/-Vsat·R2/(R1+R2)', () => {
+    // Inverting Schmitt trigger, R1 = 20k feedback, R2 = 10k: thresholds at a third of the
+    // saturated output (op-amp textbooks, hysteresis comparator). At t = 0 the input is -5 V,
+    // below the lower threshold: only the high state is consistent.
+    const result = runText(`
+circuit: schmitt
+parts:
+  SRC: { voltage: { triangle: { low: -5, high: 5, frequency: 1k } }, between: [in, gnd] }
+  R1: { resistor: 20k, between: [out, pos] }
+  R2: { resistor: 10k, between: [pos, gnd] }
+  CMP: { opamp: general-purpose, plus: pos, minus: in, out: out, supply: [-12, 12] }
+simulate: { duration: 2m, output-step: 0.5u }
+probes: [in, out]
+`);
+    const out = column(result, 'out');
+    const input = column(result, 'in');
+    const vsat = out[0];
+    expect(vsat).toBeGreaterThan(10);
+    const threshold = vsat / 3;
+    // The output leaves the rail when the input passes the threshold (within the 20 mV/us
+    // ramp times the few microseconds the loop takes to regenerate).
+    const down = crossing(result.time, out, vsat - 0.5, false);
+    expect(Math.abs(at(result.time, input, down) - threshold)).toBeLessThan(0.1);
+    const up = crossing(result.time, out, -vsat + 0.5, true, down + 100e-6);
+    expect(Math.abs(at(result.time, input, up) + threshold)).toBeLessThan(0.1);
+  });
+
   it('an amplifier that starts saturated finds its operating point', () => {
     const result = runText(`
 circuit: starts-saturated

@@ -107,7 +107,7 @@ export class Equations {
       this.stats.solves++;
       this.stats.newtonIterations++;
       if (!allFinite(this.next)) return false;
-      const converged = !limited && this.settled(x, this.next);
+      const converged = !limited && this.converged(x, this.next);
       x.set(this.next);
       if (converged) return true;
     }
@@ -151,7 +151,8 @@ export class Equations {
     return Int32Array.from([...watched].sort((a, b) => a - b));
   }
 
-  private settled(previous: Float64Array, next: Float64Array): boolean {
+  /** True when every unknown moved less than Newton's tolerance from `previous` to `next`. */
+  converged(previous: Float64Array, next: Float64Array): boolean {
     const rel = this.newton.relative;
     for (let i = 0; i < this.size; i++) {
       const limit = rel * Math.max(Math.abs(previous[i]), Math.abs(next[i])) + this.tolerance[i];
