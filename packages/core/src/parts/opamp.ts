@@ -1,5 +1,6 @@
 import type { MapReader, ValueReader } from '../circuit/reader.ts';
 import { parseQuantity } from '../units/si.ts';
+import { suggestion } from '../circuit/suggest.ts';
 import { quantities } from '../units/quantity.ts';
 import { stampBranchIncidence, stampConductance, stampCurrent } from '../solver/stamps.ts';
 import { across, CapacitorCompanion } from './capacitor-companion.ts';
@@ -71,7 +72,7 @@ function readParameters(main: ValueReader): { preset: OpampPresetName; parameter
 function readPreset(value: ValueReader): OpampPresetName {
   const text = value.kind() === 'scalar' ? value.text() : '';
   if ((opampPresetNames as string[]).includes(text)) return text as OpampPresetName;
-  value.fail(`'${text}' is not an op-amp class`, `choose one of ${opampPresetNames.join(', ')}`);
+  value.fail(`'${text}' is not an op-amp class`, suggestion(text, opampPresetNames, 'op-amp classes'));
   return 'general-purpose';
 }
 
