@@ -21,6 +21,14 @@ describe('tolerance keys', () => {
     ]);
   });
 
+  it('refuses a gain tolerance in dB, which is a ratio and not a gain difference', () => {
+    const { circuit, issues } = read('  E1: { vcvs: 10, tolerance: 1dB, sense: [in, gnd], between: [out, gnd] }');
+    expect(circuit).toBeUndefined();
+    const issue = issues.find((i) => i.severity === 'error')!;
+    expect(issue.message).toBe('a gain tolerance cannot be written in dB');
+    expect(issue.part).toBe('E1');
+  });
+
   it('rejects a tolerance that makes a value invalid, with position and hint', () => {
     const { circuit, issues } = read('  R1: { resistor: 10k, tolerance: 120%, between: [in, out] }');
     expect(circuit).toBeUndefined();

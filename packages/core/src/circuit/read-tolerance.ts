@@ -46,6 +46,11 @@ export function readTolerances(kind: PartKind<PartSpecBase>, spec: PartSpecBase,
 }
 
 function readOne(value: ValueReader, tolerable: TolerableValue<PartSpecBase>, spec: PartSpecBase, distribution: Distribution): Tolerance | undefined {
+  // ±1 dB is a ratio, not a gain difference: refuse it rather than read 1 dB as ±1.12 V/V.
+  if (tolerable.quantity.decibels && value.kind() === 'scalar' && /dB\s*$/.test(value.text())) {
+    value.fail('a gain tolerance cannot be written in dB', 'write it in percent (±1 dB is about +12% / -11%) or as a gain difference in V/V');
+    return undefined;
+  }
   const relative = value.kind() === 'scalar' && value.text().trim().endsWith('%');
   const amount = relative ? value.number(quantities.fraction, { min: 0 }) : value.number(tolerable.quantity, { min: 0 });
   if (Number.isNaN(amount)) return undefined;
