@@ -39,6 +39,29 @@ describe('SVG plots', () => {
     expect(svg).toContain('invented &lt;plot&gt; &amp; co.yaml');
   });
 
+  it('shade the intervals where an amplifier sat at a rail, one path per amplifier', () => {
+    // An invented gain-of-20 stage driven 1 V peak: it clips at +/-8 V twice per period.
+    const clipping = buildCircuit({
+      circuit: 'invented-clipping-stage',
+      parts: {
+        VS: { voltage: { sine: { amplitude: 1, frequency: '500' } }, between: ['in', 'gnd'] },
+        RG: { resistor: '10k', between: ['sum', 'gnd'] },
+        RF: { resistor: '190k', between: ['sum', 'out'] },
+        AMP: { opamp: { preset: 'general-purpose', headroom: 2 }, plus: 'in', minus: 'sum', out: 'out', supply: [-10, 10] },
+      },
+      simulate: { duration: '4m', 'output-step': '4u' },
+      probes: ['in', 'out'],
+    });
+    const run = runCircuit(clipping);
+    const svg = renderFigure(runFigure(clipping, 'clipping.yaml', run.transient, run.adcs, run.findings.saturation));
+    expect(xmlProblems(svg)).toEqual([]);
+    expect(paths(svg).series).toEqual(['AMP at a rail', 'in', 'out']);
+    // One closed rectangle per rail interval: 2 periods of a 500 Hz sine, each clipping twice.
+    const spans = /data-series="AMP at a rail"[^>]* d="([^"]*)"/.exec(svg)![1];
+    expect(spans.match(/Z/g)!.length).toBe(run.findings.saturation.length);
+    expect(run.findings.saturation.length).toBe(4);
+  });
+
   it('draw an envelope as a band and a nominal path per probe and per ADC', () => {
     const result = envelope(circuit, { corners: true });
     const svg = renderFigure(envelopeFigure(result, circuit.name, 'invented.yaml'));

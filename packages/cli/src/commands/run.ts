@@ -53,7 +53,7 @@ export function runCommand(file: string, options: RunOptions): void {
     const adcFiles = writeAdcFiles(staging, circuit.name, run.adcs, codeFormats);
     const names = ['waveforms.csv', ...adcFiles, ...writeReport(staging, report).map((path) => basename(path))];
     if (options.plot) {
-      writeFileSync(join(staging, 'plot.svg'), renderFigure(runFigure(circuit, fileName, run.transient, run.adcs)));
+      writeFileSync(join(staging, 'plot.svg'), renderFigure(runFigure(circuit, fileName, run.transient, run.adcs, run.findings.saturation)));
       names.push('plot.svg');
     }
     return { report, files: names };

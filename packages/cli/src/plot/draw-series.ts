@@ -33,6 +33,16 @@ export function drawSeries(series: Series, colour: string, x: ScaleLinear<number
         .y((p) => y(p[1]));
       return element('path', { ...tag, d: `${outline(ring) ?? ''}Z`, fill: colour, 'fill-opacity': 0.22, stroke: colour, 'stroke-opacity': 0.5, 'stroke-width': 0.75 });
     }
+    case 'spans': {
+      const [bottom, top] = y.range();
+      let d = '';
+      for (let i = 0; i < series.starts.length; i++) {
+        const x0 = x(series.starts[i]).toFixed(2);
+        const x1 = Math.max(x(series.ends[i]), x(series.starts[i]) + 1).toFixed(2);
+        d += `M${x0},${top.toFixed(2)}H${x1}V${bottom.toFixed(2)}H${x0}Z`;
+      }
+      return element('path', { ...tag, d, fill: colour, 'fill-opacity': 0.12, stroke: 'none' });
+    }
     case 'marks': {
       let d = '';
       for (let i = 0; i < series.time.length; i++) {

@@ -11,8 +11,8 @@ export function legend(series: readonly Series[], colours: readonly string[], ri
   const rows = series.map((s, i) => {
     const y = top + 10 + i * rowHeight;
     const swatch =
-      s.kind === 'band'
-        ? element('rect', { x: left + 6, y: y - 5, width: 14, height: 10, fill: colours[i], 'fill-opacity': 0.22, stroke: colours[i], 'stroke-opacity': 0.5 })
+      s.kind === 'band' || s.kind === 'spans'
+        ? element('rect', { x: left + 6, y: y - 5, width: 14, height: 10, fill: colours[i], 'fill-opacity': s.kind === 'spans' ? 0.12 : 0.22, stroke: colours[i], 'stroke-opacity': 0.5 })
         : s.kind === 'marks'
           ? element('circle', { cx: left + 13, cy: y, r: 3.5, fill: 'none', stroke: colours[i], 'stroke-width': 1.5 })
           : element('line', { x1: left + 6, x2: left + 20, y1: y, y2: y, stroke: colours[i], 'stroke-width': 2, 'stroke-dasharray': s.kind === 'line' && s.dashed ? '5 3' : undefined });

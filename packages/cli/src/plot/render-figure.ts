@@ -60,7 +60,7 @@ function timeSpan(panels: readonly Panel[]): [number, number] {
   let start = Infinity;
   let end = -Infinity;
   for (const s of panels.flatMap((p) => p.series)) {
-    if (s.time.length === 0) continue;
+    if (s.kind === 'spans' || s.time.length === 0) continue;
     start = Math.min(start, s.time[0]);
     end = Math.max(end, s.time[s.time.length - 1]);
   }
@@ -77,7 +77,7 @@ function valueSpan(series: readonly Series[]): [number, number] {
   };
   for (const s of series) {
     if (s.kind === 'band') take(s.low), take(s.high);
-    else take(s.values);
+    else if (s.kind !== 'spans') take(s.values);
   }
   return low <= high ? [low, high] : [0, 1];
 }

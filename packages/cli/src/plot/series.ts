@@ -7,7 +7,9 @@ export type Series =
   /** Values held until the next sample (ADC codes). */
   | { readonly kind: 'steps'; readonly name: string; readonly time: ArrayLike<number>; readonly values: ArrayLike<number> }
   /** Marked points (violations). */
-  | { readonly kind: 'marks'; readonly name: string; readonly time: ArrayLike<number>; readonly values: ArrayLike<number> };
+  | { readonly kind: 'marks'; readonly name: string; readonly time: ArrayLike<number>; readonly values: ArrayLike<number> }
+  /** Time intervals shaded across the whole panel (an amplifier held at a rail). */
+  | { readonly kind: 'spans'; readonly name: string; readonly starts: ArrayLike<number>; readonly ends: ArrayLike<number> };
 
 /** One stacked panel: its own y axis, the shared time axis. */
 export interface Panel {
