@@ -153,6 +153,19 @@ const TANH_STEP_LIMIT = 4;
  * saturated side to the other forever. The argument moves at most TANH_STEP_LIMIT from where
  * the last iteration linearized, unless both lie deep on the same flat side.
  */
+/**
+ * Device bypass: keep the last linearization of a tanh stage when the new point would change
+ * it negligibly (argument within 1e-3, or value and slope both within 1e-9 deep in a flat
+ * side). The matrix then stays the same and so does its factorization; the current error is
+ * below 1e-6 of the stage's limit.
+ */
+function bypasses(u: number, last: number): boolean {
+  if (Math.abs(u - last) < 1e-3) return true;
+  const a = Math.tanh(u);
+  const b = Math.tanh(last);
+  return Math.abs(a - b) < 1e-9 && Math.abs(a * a - b * b) < 1e-9;
+}
+
 function limitTanhArgument(u: number, last: number): number {
   if (Math.abs(u) > 3 && Math.abs(last) > 3 && Math.sign(u) === Math.sign(last)) return u;
   if (Math.abs(u - last) <= TANH_STEP_LIMIT) return u;
@@ -260,7 +273,8 @@ class OpampDevice implements Device {
     // Input stage: i = Imax·tanh(u), u = gm·vd / Imax, linearized at a limited u.
     const vd = across(x, this.p, this.m) + q.offset;
     const u = (this.gm * vd) / this.imax;
-    const uLin = limitTanhArgument(u, this.uLast);
+    const inputBypassed = bypasses(u, this.uLast);
+    const uLin = inputBypassed ? this.uLast : limitTanhArgument(u, this.uLast);
     this.uLast = uLin;
     const th = Math.tanh(uLin);
     const i0 = this.imax * th;
@@ -273,7 +287,7 @@ class OpampDevice implements Device {
 
     this.stampClamp(m, x);
     const outputLimited = q.currentLimit !== undefined && this.stampCurrentLimit(m, x, q.rout, q.currentLimit);
-    return uLin !== u || outputLimited;
+    return (!inputBypassed && uLin !== u) || outputLimited;
   }
 
   /** Piecewise clamp of the gain node at the rails less headroom: a stiff conductance beyond them. */
@@ -293,13 +307,14 @@ class OpampDevice implements Device {
   private stampCurrentLimit(m: Mna, x: Float64Array, rout: number, limit: number): boolean {
     const scale = rout * limit;
     const w = across(x, this.drive, this.out) / scale;
-    const wLin = limitTanhArgument(w, this.wLast);
+    const bypassed = bypasses(w, this.wLast);
+    const wLin = bypassed ? this.wLast : limitTanhArgument(w, this.wLast);
     this.wLast = wLin;
     const th = Math.tanh(wLin);
     const g = (1 - th * th) / rout;
     stampConductance(m, this.drive, this.out, g);
     stampCurrent(m, this.drive, this.out, limit * th - g * wLin * scale);
-    return wLin !== w;
+    return !bypassed && wLin !== w;
   }
 
   region(x: Float64Array): number {
