@@ -1,25 +1,14 @@
-import type { MapReader, ValueReader } from '../circuit/reader.ts';
-import { parseQuantity } from '../units/si.ts';
-import { suggestion } from '../circuit/suggest.ts';
-import { quantities } from '../units/quantity.ts';
 import { stampBranchIncidence, stampConductance, stampCurrent } from '../solver/stamps.ts';
 import { across, CapacitorCompanion } from './capacitor-companion.ts';
 import type { Binder, Device, Link, Mna, StepInfo } from './device.ts';
-import type { PartKind, PartSpecBase, PinRef } from './part-kind.ts';
-import { nodeOf, pinRef } from './pins.ts';
-import { opampPresetNames, opampPresets, type OpampParameters, type OpampPresetName } from './opamp-presets.ts';
+import type { PartKind } from './part-kind.ts';
+import { nodeOf } from './pins.ts';
+import { readOpamp } from './opamp-read.ts';
+import type { OpampSpec, OpampStatus } from './opamp-spec.ts';
 import { opampTolerable } from './opamp-tolerable.ts';
+import { bypasses, limitTanhArgument } from './tanh-linearization.ts';
 
-/** A supply rail: a fixed voltage, or a node whose voltage the clamp follows. */
-export type Supply = { readonly volts: number } | { readonly node: string };
-
-export interface OpampSpec extends PartSpecBase {
-  readonly kind: 'opamp';
-  readonly preset: OpampPresetName;
-  readonly parameters: OpampParameters;
-  /** Low and high supply; absent only for the `ideal` preset (then the output is unclamped). */
-  readonly supply?: readonly [Supply, Supply];
-}
+export type { OpampSpec, OpampStatus, Supply } from './opamp-spec.ts';
 
 /**
  * `opamp: general-purpose` or `opamp: { preset: jfet-input, gbw: 5MHz, ... }`, with
@@ -28,110 +17,10 @@ export interface OpampSpec extends PartSpecBase {
 export const opamp: PartKind<OpampSpec> = {
   key: 'opamp',
   summary: 'op-amp macro-model: `opamp: <preset>` or `{ preset, gain, gbw, slew, headroom, rout, offset, bias, second-pole, current-limit }`, `plus`, `minus`, `out`, `supply: [low, high]`',
-  read: (name, main, options) => {
-    const { preset, parameters } = readParameters(main);
-    const pins: PinRef[] = [];
-    for (const pin of ['plus', 'minus', 'out'] as const) {
-      const v = options.need(pin, `write \`${pin}: <node>\``);
-      if (v !== undefined) pins.push(pinRef(pin, v));
-    }
-    const supply = readSupply(options, preset, pins);
-    return { kind: 'opamp', name, preset, parameters, pins, ...(supply ? { supply } : {}) };
-  },
+  read: readOpamp,
   create: (spec) => new OpampDevice(spec),
   tolerable: opampTolerable,
 };
-
-function readParameters(main: ValueReader): { preset: OpampPresetName; parameters: OpampParameters } {
-  if (main.kind() !== 'map') {
-    const preset = readPreset(main);
-    return { preset, parameters: opampPresets[preset] };
-  }
-  const m = main.map();
-  const presetValue = m.need('preset', `name a class: ${opampPresetNames.join(', ')}`);
-  const preset = presetValue ? readPreset(presetValue) : 'general-purpose';
-  const base: OpampParameters = opampPresets[preset];
-  const parameters: OpampParameters = {
-    gain: m.numberOr('gain', quantities.gain, base.gain, { above: 1 }),
-    gbw: m.numberOr('gbw', quantities.frequency, base.gbw, { above: 0 }),
-    slew: m.numberOr('slew', quantities.slewRate, base.slew, { above: 0 }),
-    headroom: readHeadroom(m, base.headroom),
-    rout: m.numberOr('rout', quantities.resistance, base.rout, { min: 0 }),
-    offset: m.numberOr('offset', quantities.voltage, base.offset),
-    bias: m.numberOr('bias', quantities.current, base.bias),
-    ...optional(m, 'second-pole', 'secondPole', quantities.frequency, base.secondPole),
-    ...optional(m, 'current-limit', 'currentLimit', quantities.current, base.currentLimit),
-  };
-  if (parameters.currentLimit !== undefined && parameters.rout === 0) {
-    (m.get('current-limit') ?? m.get('rout') ?? main).fail('a current limit needs an output resistance above 0', 'set `rout:` (tens of ohms is typical) or remove `current-limit`');
-  }
-  m.finish();
-  return { preset, parameters };
-}
-
-function readPreset(value: ValueReader): OpampPresetName {
-  const text = value.kind() === 'scalar' ? value.text() : '';
-  if ((opampPresetNames as string[]).includes(text)) return text as OpampPresetName;
-  value.fail(`'${text}' is not an op-amp class`, suggestion(text, opampPresetNames, 'op-amp classes'));
-  return 'general-purpose';
-}
-
-function readHeadroom(m: MapReader, fallback: readonly [number, number]): readonly [number, number] {
-  const v = m.get('headroom');
-  if (v === undefined) return fallback;
-  if (v.kind() !== 'list') {
-    const h = v.number(quantities.voltage, { min: 0 });
-    return [h, h];
-  }
-  const items = v.list();
-  if (items.length !== 2) {
-    v.fail('`headroom` is one number or [low, high]', 'write `headroom: 1.5` or `headroom: [1.2, 1.5]`');
-    return fallback;
-  }
-  return [items[0].number(quantities.voltage, { min: 0 }), items[1].number(quantities.voltage, { min: 0 })];
-}
-
-function optional<K extends string>(m: MapReader, key: string, field: K, q: typeof quantities.frequency | typeof quantities.current, fallback: number | undefined): Partial<Record<K, number>> {
-  const v = m.get(key);
-  const value = v !== undefined ? v.number(q, { above: 0 }) : fallback;
-  return value === undefined ? {} : ({ [field]: value } as Record<K, number>);
-}
-
-function readSupply(options: MapReader, preset: OpampPresetName, pins: PinRef[]): readonly [Supply, Supply] | undefined {
-  const v = preset === 'ideal' ? options.get('supply') : options.need('supply', 'write `supply: [-12, 12]` with volts or node names');
-  if (v === undefined) return undefined;
-  const items = v.list();
-  if (items.length !== 2) {
-    v.fail('`supply` needs two entries, [low, high]', 'write `supply: [-12, 12]` or `supply: [vee, vcc]`');
-    return undefined;
-  }
-  const rails = items.map((item, i): Supply => {
-    const text = item.node();
-    const parsed = parseQuantity(text, quantities.voltage);
-    if ('value' in parsed) return { volts: parsed.value };
-    pins.push(pinRef(i === 0 ? 'supply-low' : 'supply-high', item));
-    return { node: text };
-  });
-  const [low, high] = rails;
-  if ('volts' in low && 'volts' in high && !(high.volts > low.volts)) v.fail(`the high supply (${high.volts} V) must be above the low one (${low.volts} V)`, 'write `supply: [low, high]`');
-  return [low, high];
-}
-
-/** What an amplifier is doing at one solution, for saturation reports. */
-export interface OpampStatus {
-  /** -1 at the low clamp, 1 at the high clamp, 0 in between. */
-  readonly rail: -1 | 0 | 1;
-  /** The input stage delivers over 90% of its current limit: the output moves at the slew rate. */
-  readonly slewing: boolean;
-  /** The output current is over 90% of `current-limit`. */
-  readonly currentLimited: boolean;
-  /** v(plus) - v(minus) + offset: how hard the loop is pushing, volts. */
-  readonly inputError: number;
-  /** Output pin voltage. */
-  readonly output: number;
-  /** Output clamp levels (supply less headroom) at this solution; ±Infinity without supplies. */
-  readonly limits: readonly [low: number, high: number];
-}
 
 /** True for op-amp devices, which report their status. */
 export function isOpamp(device: Device): device is Device & { status(x: Float64Array): OpampStatus; readonly spec: OpampSpec } {
@@ -144,33 +33,6 @@ const C1 = 1e-9;
 const CLAMP_OVERSHOOT = 1e-3;
 /** Conductance of the second-pole stage; its capacitor sets the pole. */
 const G2 = 1e-3;
-/** Newton may move a tanh stage's normalized argument by at most this per iteration. */
-const TANH_STEP_LIMIT = 4;
-
-/**
- * Newton step limiting for a tanh characteristic, in the spirit of junction limiting: in the
- * flat parts the slope vanishes and a full Newton step can fling the argument from one
- * saturated side to the other forever. The argument moves at most TANH_STEP_LIMIT from where
- * the last iteration linearized, unless both lie deep on the same flat side.
- */
-/**
- * Device bypass: keep the last linearization of a tanh stage when the new point would change
- * it negligibly (argument within 1e-3, or value and slope both within 1e-9 deep in a flat
- * side). The matrix then stays the same and so does its factorization; the current error is
- * below 1e-6 of the stage's limit.
- */
-function bypasses(u: number, last: number): boolean {
-  if (Math.abs(u - last) < 1e-3) return true;
-  const a = Math.tanh(u);
-  const b = Math.tanh(last);
-  return Math.abs(a - b) < 1e-9 && Math.abs(a * a - b * b) < 1e-9;
-}
-
-function limitTanhArgument(u: number, last: number): number {
-  if (Math.abs(u) > 3 && Math.abs(last) > 3 && Math.sign(u) === Math.sign(last)) return u;
-  if (Math.abs(u - last) <= TANH_STEP_LIMIT) return u;
-  return last + Math.sign(u - last) * TANH_STEP_LIMIT;
-}
 
 /**
  * The macro-model (DESIGN.md): the differential input plus offset drives a transconductance
