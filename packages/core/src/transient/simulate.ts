@@ -5,6 +5,8 @@ import { Topology } from '../solver/topology.ts';
 import { Equations } from './equations.ts';
 import { solveOperatingPoint } from './operating-point.ts';
 import { OutputGrid } from './output-grid.ts';
+import { OutputRecorder } from './output-recorder.ts';
+import { ObserverHub } from './observer-hub.ts';
 import type { RunStats, SimulateOptions, TransientResult } from './result.ts';
 import { SimulationError } from './simulation-error.ts';
 import { TruncationError } from './truncation-error.ts';
@@ -73,45 +75,16 @@ export function simulate(circuit: Circuit, options: SimulateOptions = {}): Trans
   const error = new TruncationError(n, equations.watchedUnknowns(), settings.relativeTolerance, absolute);
   error.restart(0, x);
 
-  const observers = options.observers ?? [];
-  const observerContext = {
-    node: (name: string): number => {
-      if (name !== 'gnd' && !topology.labels.slice(0, topology.nodeCount).includes(name)) throw new Error(`no node named ${name}`);
-      return topology.node(name);
-    },
-    devices,
-    labels: topology.labels,
-  };
-  for (const o of observers) o.bind(observerContext);
-  const instants = observers.filter((o) => o.nextInstant !== undefined);
-  const nextInstant = (after: number): number => {
-    let next = Infinity;
-    for (const o of instants) next = Math.min(next, o.nextInstant!(after));
-    return next;
-  };
-  for (const o of observers) o.accepted(0, x);
-
+  const observers = new ObserverHub(options.observers ?? [], topology, devices);
+  observers.accepted(0, x);
   const grid = new OutputGrid(settings.outputStep, duration);
-  const probeIndex = Int32Array.from(circuit.probes, (p) => topology.node(p));
-  const keep = options.keepColumns !== false;
-  const time = new Float64Array(keep ? grid.rows : 0);
-  const columns = circuit.probes.map(() => new Float64Array(keep ? grid.rows : 0));
-  const rowValues = new Float64Array(probeIndex.length);
-  const record = (row: number): void => {
-    const t = grid.time(row);
-    for (let p = 0; p < probeIndex.length; p++) rowValues[p] = probeIndex[p] >= 0 ? x[probeIndex[p]] : 0;
-    if (keep) {
-      time[row] = t;
-      for (let p = 0; p < probeIndex.length; p++) columns[p][row] = rowValues[p];
-    }
-    options.onRow?.(t, rowValues);
-  };
-  record(0);
+  const output = new OutputRecorder(grid, Int32Array.from(circuit.probes, (p) => topology.node(p)), options.keepColumns !== false, options.onRow);
+  output.record(0, x);
 
   let t = 0;
   let row = 1;
   let corner = equations.nextCorner(eps);
-  let instant = nextInstant(eps);
+  let instant = observers.nextInstant(eps);
   let sinceCorner = 0;
   let natural = fixed ?? Math.min(maxStep, settings.outputStep);
   let lastH = NaN;
@@ -197,17 +170,17 @@ export function simulate(circuit: Circuit, options: SimulateOptions = {}): Trans
     } else {
       error.push(t, x);
     }
-    for (const o of observers) o.accepted(t, x);
-    if (t >= instant - eps) instant = nextInstant(t + eps);
-    while (row < grid.rows && grid.time(row) <= t + eps) record(row++);
+    observers.accepted(t, x);
+    if (t >= instant - eps) instant = observers.nextInstant(t + eps);
+    while (row < grid.rows && grid.time(row) <= t + eps) output.record(row++, x);
     if (options.onProgress && t >= nextProgress * duration) {
       options.onProgress(t / duration);
       nextProgress = Math.floor((t / duration) * 100 + 1) / 100;
     }
   }
 
-  const columnMap = new Map(circuit.probes.map((p, i) => [p, columns[i]] as const));
-  return { time, columns: columnMap, probes: circuit.probes, stats, operatingPoint };
+  const columns = new Map(circuit.probes.map((p, i) => [p, output.columns[i]] as const));
+  return { time: output.time, columns, probes: circuit.probes, stats, operatingPoint };
 }
 
 function stuck(t: number, nodes: string[], why: string): SimulationError {
