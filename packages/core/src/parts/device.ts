@@ -6,9 +6,9 @@
  *    currents, internal nodes). Index -1 is ground; stamps to it are dropped by `Mna`.
  * 2. `stampStatic` once: matrix entries that never change in a run (resistors, the incidence
  *    of voltage-defined branches).
- * 3. `stampStep` whenever the step size or method changes, and after every corner:
- *    companion conductances, and conductances that change only at the device's own corners
- *    (a scheduled switch). With `step.method === 'dc'` it stamps the operating-point form
+ * 3. `stampStep` whenever the step size or method changes: companion conductances. A device
+ *    with corners of its own (a scheduled switch) may also stamp conductances that change only
+ *    at those corners: the step layer is then rebuilt after every corner. With `step.method === 'dc'` it stamps the operating-point form
  *    (capacitor open, inductor short).
  * 4. `stampRhs` every step attempt: source values at `step.t` (scaled by `step.sourceScale`)
  *    and companion history terms.

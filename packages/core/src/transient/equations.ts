@@ -24,7 +24,16 @@ export interface NewtonSettings {
 export class Equations {
   readonly size: number;
   private readonly mna: MnaSystem;
-  private readonly lu: LuSolver;
+  private lu: LuSolver;
+  /**
+   * For linear circuits, the factorization of the step before last, with its step size and
+   * method: after each corner the method goes backward Euler → trapezoidal at an unchanged
+   * step, and this spares refactoring for the way back.
+   */
+  private spare: LuSolver;
+  private spareH = NaN;
+  private spareMethod = '';
+  private readonly changesAtCorners: boolean;
   private readonly staticMatrix: Float64Array;
   private readonly stepMatrix: Float64Array;
   private readonly factored: Float64Array;
@@ -51,6 +60,8 @@ export class Equations {
     this.size = n;
     this.mna = new MnaSystem(n);
     this.lu = new LuSolver(n);
+    this.spare = new LuSolver(this.nonlinearCount(devices) === 0 ? n : 0);
+    this.changesAtCorners = devices.some((d) => d.stampStep !== undefined && d.nextCorner !== undefined);
     this.staticMatrix = new Float64Array(n * n);
     this.stepMatrix = new Float64Array(n * n);
     this.factored = new Float64Array(n * n);
@@ -67,9 +78,34 @@ export class Equations {
     this.staticMatrix.set(this.mna.matrix);
   }
 
-  /** Rebuild the step layer before the next solve: called after every corner. */
-  invalidateStep(): void {
+  /**
+   * A corner was passed: devices whose step stamps change at their own corners (a scheduled
+   * switch) need the step layer rebuilt, and no kept factorization is valid any more.
+   */
+  cornerPassed(): void {
+    if (!this.changesAtCorners) return;
     this.stepH = NaN;
+    this.spareH = NaN;
+  }
+
+  /**
+   * The step changed: for a linear circuit, keep the current factorization as the spare and
+   * take the spare if it was made for this step.
+   */
+  private swapSpare(step: StepInfo): void {
+    const reuse = this.nonlinear.length === 0 && this.factorValid && step.h === this.spareH && step.method === this.spareMethod;
+    if (this.nonlinear.length === 0 && this.factorValid) {
+      [this.lu, this.spare] = [this.spare, this.lu];
+      this.spareH = this.stepH;
+      this.spareMethod = this.stepMethod;
+    }
+    this.stepH = step.h;
+    this.stepMethod = step.method;
+    this.factorValid = reuse;
+  }
+
+  private nonlinearCount(devices: readonly Device[]): number {
+    return devices.filter((d) => d.stampNewton !== undefined).length;
   }
 
   /**
@@ -83,9 +119,7 @@ export class Equations {
       m.matrix.set(this.staticMatrix);
       for (const d of this.withStep) d.stampStep!(m, step);
       this.stepMatrix.set(m.matrix);
-      this.stepH = step.h;
-      this.stepMethod = step.method;
-      this.factorValid = false;
+      this.swapSpare(step);
     }
     m.b.fill(0);
     for (const d of this.withRhs) d.stampRhs!(m, step);

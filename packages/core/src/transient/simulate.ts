@@ -165,7 +165,7 @@ export function simulate(circuit: Circuit, options: SimulateOptions = {}): Trans
       sinceCorner = 0;
       if (t >= corner - eps) {
         corner = equations.nextCorner(t + eps);
-        equations.invalidateStep();
+        equations.cornerPassed();
       }
     } else {
       error.push(t, x);
