@@ -2,6 +2,7 @@ import { readFileSync } from 'node:fs';
 import { dirname, join, resolve } from 'node:path';
 import { readCircuit, formatIssue, type Circuit } from '@voltcast/core';
 import { InputError } from './exit-codes.ts';
+import { describeFsError } from './describe-fs-error.ts';
 
 /** A circuit read from disk, with the warnings the reader found (already formatted). */
 export interface CircuitFile {
@@ -48,12 +49,4 @@ export function readCircuitFile(fileName: string): CircuitFile {
     fileName,
     warnings: issues.filter((issue) => issue.severity === 'warning').map((issue) => formatIssue(issue, fileName)),
   };
-}
-
-function describeFsError(error: unknown): string {
-  const code = (error as NodeJS.ErrnoException).code;
-  if (code === 'ENOENT') return 'no such file';
-  if (code === 'EISDIR') return 'it is a folder, not a file';
-  if (code === 'EACCES') return 'permission denied';
-  return error instanceof Error ? error.message : String(error);
 }

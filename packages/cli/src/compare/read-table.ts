@@ -1,6 +1,7 @@
 import { readFileSync } from 'node:fs';
 import { parse } from 'csv-parse/sync';
 import { InputError } from '../exit-codes.ts';
+import { describeFsError } from '../describe-fs-error.ts';
 
 /** A CSV file of numbers with named columns, as read for `voltcast compare`. */
 export interface NumberTable {
@@ -21,8 +22,7 @@ export function readNumberTable(file: string): NumberTable {
   try {
     text = readFileSync(file, 'utf8');
   } catch (error) {
-    const code = (error as NodeJS.ErrnoException).code;
-    throw new InputError(`cannot read ${file}: ${code === 'ENOENT' ? 'no such file' : (error as Error).message}`);
+    throw new InputError(`cannot read ${file}: ${describeFsError(error)}`);
   }
   let rows: string[][];
   try {
