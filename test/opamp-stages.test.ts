@@ -2,7 +2,7 @@ import { readFileSync, readdirSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { parseCircuit, simulate } from '@voltcast/core';
-import { column, runText } from './support/run-text.ts';
+import { column } from './support/run-text.ts';
 import { at, crossing, slope, swings } from './support/measure.ts';
 
 const fixtures = join(import.meta.dirname, '..', 'fixtures');

@@ -1,8 +1,8 @@
 import { readFileSync } from 'node:fs';
-import { dirname, join, resolve } from 'node:path';
+import { dirname, join } from 'node:path';
 import { readCircuit, formatIssue, type Circuit } from '@voltcast/core';
 import { InputError } from './exit-codes.ts';
-import { describeFsError } from './describe-fs-error.ts';
+import { readTextFile, reasonOf } from './read-text-file.ts';
 
 /** A circuit read from disk, with the warnings the reader found (already formatted). */
 export interface CircuitFile {
@@ -19,12 +19,7 @@ export interface CircuitFile {
  * included, so one run shows everything to fix.
  */
 export function readCircuitFile(fileName: string): CircuitFile {
-  let text: string;
-  try {
-    text = readFileSync(fileName, 'utf8');
-  } catch (error) {
-    throw new InputError(`cannot read circuit file ${fileName}: ${describeFsError(error)} (looked for ${resolve(fileName)})`);
-  }
+  const text = readTextFile(fileName, 'circuit file');
   const folder = dirname(fileName);
   const { circuit, issues } = readCircuit(text, {
     fileName,
@@ -34,7 +29,7 @@ export function readCircuitFile(fileName: string): CircuitFile {
       try {
         return readFileSync(path, 'utf8');
       } catch (error) {
-        throw new Error(`${describeFsError(error)} (looked for ${path})`);
+        throw new Error(`${reasonOf(error)} (looked for ${path})`);
       }
     },
   });

@@ -70,7 +70,7 @@ describe('points', () => {
     expect(saw.value(1.5e-3)).toBe(1);
     expect(saw.value(2e-3)).toBe(0);
     expect(saw.value(2.5e-3)).toBeCloseTo(0.5, 12);
-    expect(corners(saw, 6)).toEqual([1e-3, 2e-3, 3e-3, 4e-3, 5e-3, 6e-3].map((c, i) => (i % 2 === 0 ? Math.floor(i / 2) * 2e-3 + 1e-3 : ((i + 1) / 2) * 2e-3)));
+    expect(corners(saw, 6)).toEqual([1e-3, 2e-3, 3e-3, 4e-3, 5e-3, 6e-3].map((_, i) => (i % 2 === 0 ? Math.floor(i / 2) * 2e-3 + 1e-3 : ((i + 1) / 2) * 2e-3)));
   });
 
   it('does not drift over many periods: corner k·period is computed, not accumulated', () => {

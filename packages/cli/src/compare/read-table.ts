@@ -1,7 +1,6 @@
-import { readFileSync } from 'node:fs';
 import { parse } from 'csv-parse/sync';
 import { InputError } from '../exit-codes.ts';
-import { describeFsError } from '../describe-fs-error.ts';
+import { readTextFile } from '../read-text-file.ts';
 
 /** A CSV file of numbers with named columns, as read for `voltcast compare`. */
 export interface NumberTable {
@@ -18,12 +17,7 @@ export interface NumberTable {
  * number is an error naming the file, line and column.
  */
 export function readNumberTable(file: string): NumberTable {
-  let text: string;
-  try {
-    text = readFileSync(file, 'utf8');
-  } catch (error) {
-    throw new InputError(`cannot read ${file}: ${describeFsError(error)}`);
-  }
+  const text = readTextFile(file, 'CSV file');
   let rows: string[][];
   try {
     rows = parse(text, { comment: '#', skip_empty_lines: true, trim: true, relax_column_count: true, info: false, bom: true });

@@ -15,10 +15,15 @@ export class CapacitorCompanion {
 
   constructor(readonly capacitance: number) {}
 
-  /** Set the conductance for the step; stamps it between `a` and `b` (either may be ground). */
-  stampStep(m: Mna | null, a: number, b: number, step: StepInfo): void {
+  /** Set the conductance for the step (0 at the operating point). */
+  update(step: StepInfo): void {
     this.g = step.method === 'dc' ? 0 : ((step.method === 'trap' ? 2 : 1) * this.capacitance) / step.h;
-    if (m !== null && this.g !== 0) stampConductance(m, a, b, this.g);
+  }
+
+  /** Set the conductance for the step and stamp it between `a` and `b` (either may be ground). */
+  stampStep(m: Mna, a: number, b: number, step: StepInfo): void {
+    this.update(step);
+    if (this.g !== 0) stampConductance(m, a, b, this.g);
   }
 
   /** History term of the current step. */
@@ -36,9 +41,4 @@ export class CapacitorCompanion {
     this.iPrev = current ?? (step.method === 'dc' ? 0 : this.g * v - this.history(step));
     this.vPrev = v;
   }
-}
-
-/** v(a) - v(b) from a solution vector, ground being -1. */
-export function across(x: Float64Array, a: number, b: number): number {
-  return (a >= 0 ? x[a] : 0) - (b >= 0 ? x[b] : 0);
 }

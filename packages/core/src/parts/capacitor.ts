@@ -1,6 +1,7 @@
 import { quantities } from '../units/quantity.ts';
 import { stampBranchIncidence, stampBranchVoltage } from '../solver/stamps.ts';
-import { across, CapacitorCompanion } from './capacitor-companion.ts';
+import { CapacitorCompanion } from './capacitor-companion.ts';
+import { across } from '../solver/solution.ts';
 import type { Binder, Device, Link, Mna, StepInfo } from './device.ts';
 import type { PartKind, PartSpecBase } from './part-kind.ts';
 import { tolerableField } from './tolerance.ts';
@@ -61,7 +62,7 @@ class CapacitorDevice implements Device {
       this.companion.stampStep(m, this.a, this.b, step);
       return;
     }
-    this.companion.stampStep(null, this.a, this.b, step);
+    this.companion.update(step);
     if (step.method === 'dc') {
       stampBranchVoltage(m, this.k, this.a, this.b);
       return;

@@ -1,5 +1,6 @@
 import { quantities } from '../units/quantity.ts';
 import { stampBranchIncidence, stampBranchVoltage } from '../solver/stamps.ts';
+import { across } from '../solver/solution.ts';
 import type { Binder, Device, Link, Mna, StepInfo } from './device.ts';
 import type { PartKind, PartSpecBase } from './part-kind.ts';
 import { tolerableField } from './tolerance.ts';
@@ -73,7 +74,7 @@ class InductorDevice implements Device {
     m.rhs(this.k, -this.r * this.iPrev - (step.method === 'trap' ? this.vPrev : 0));
   }
   accept(x: Float64Array): void {
-    this.vPrev = (this.a >= 0 ? x[this.a] : 0) - (this.b >= 0 ? x[this.b] : 0);
+    this.vPrev = across(x, this.a, this.b);
     this.iPrev = x[this.k];
   }
   stateUnknowns(): readonly number[] {

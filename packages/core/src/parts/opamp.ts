@@ -1,5 +1,6 @@
 import { stampBranchIncidence, stampConductance, stampCurrent } from '../solver/stamps.ts';
-import { across, CapacitorCompanion } from './capacitor-companion.ts';
+import { CapacitorCompanion } from './capacitor-companion.ts';
+import { across, valueAt } from '../solver/solution.ts';
 import type { Binder, Device, Link, Mna, StepInfo } from './device.ts';
 import type { PartKind } from './part-kind.ts';
 import { nodeOf } from './pins.ts';
@@ -205,7 +206,7 @@ class OpampDevice implements Device {
     s.rail = this.region(x) as -1 | 0 | 1;
     s.slewing = Math.abs(Math.tanh((this.gm * s.inputError) / this.imax)) > 0.9;
     s.currentLimited = outputCurrent > 0.9;
-    s.output = this.out >= 0 ? x[this.out] : 0;
+    s.output = valueAt(x, this.out);
     s.limits[0] = this.limit(x, -1);
     s.limits[1] = this.limit(x, 1);
     return s;

@@ -60,7 +60,6 @@ export class Equations {
     this.size = n;
     this.mna = new MnaSystem(n);
     this.lu = new LuSolver(n);
-    this.spare = new LuSolver(this.nonlinearCount(devices) === 0 ? n : 0);
     this.changesAtCorners = devices.some((d) => d.stampStep !== undefined && d.nextCorner !== undefined);
     this.staticMatrix = new Float64Array(n * n);
     this.stepMatrix = new Float64Array(n * n);
@@ -69,6 +68,7 @@ export class Equations {
     this.next = new Float64Array(n);
     this.tolerance = Float64Array.from(topology.isCurrent, (c) => (c ? newton.current : newton.voltage));
     this.nonlinear = devices.filter((d) => d.stampNewton !== undefined);
+    this.spare = new LuSolver(this.nonlinear.length === 0 ? n : 0);
     this.withRhs = devices.filter((d) => d.stampRhs !== undefined);
     this.withStep = devices.filter((d) => d.stampStep !== undefined);
     this.withAccept = devices.filter((d) => d.accept !== undefined);
@@ -93,19 +93,18 @@ export class Equations {
    * take the spare if it was made for this step.
    */
   private swapSpare(step: StepInfo): void {
-    const reuse = this.nonlinear.length === 0 && this.factorValid && step.h === this.spareH && step.method === this.spareMethod;
+    let reuse = false;
     if (this.nonlinear.length === 0 && this.factorValid) {
-      [this.lu, this.spare] = [this.spare, this.lu];
+      reuse = step.h === this.spareH && step.method === this.spareMethod;
+      const kept = this.lu;
+      this.lu = this.spare;
+      this.spare = kept;
       this.spareH = this.stepH;
       this.spareMethod = this.stepMethod;
     }
     this.stepH = step.h;
     this.stepMethod = step.method;
     this.factorValid = reuse;
-  }
-
-  private nonlinearCount(devices: readonly Device[]): number {
-    return devices.filter((d) => d.stampNewton !== undefined).length;
   }
 
   /**

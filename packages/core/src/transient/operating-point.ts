@@ -31,14 +31,14 @@ export function solveOperatingPoint(equations: Equations, x: Float64Array, step:
   x.fill(0);
   if (dc()) return;
   const good = new Float64Array(x.length);
-  const reached = stepSources(equations, x, step, good, dc);
+  const reached = stepSources(x, step, good, dc);
   if (reached === 1) return;
   if (settleInPseudoTime(equations, x, step, good) && dc()) return;
   throw failure(equations, good, x, reached);
 }
 
 /** Source stepping; returns the fraction of the sources reached (1 when solved, x then holds the solution). */
-function stepSources(equations: Equations, x: Float64Array, step: StepInfo, good: Float64Array, dc: () => boolean): number {
+function stepSources(x: Float64Array, step: StepInfo, good: Float64Array, dc: () => boolean): number {
   let scale = 0;
   let increment = 0.1;
   step.sourceScale = 0;

@@ -1,4 +1,5 @@
 import type { OutputGrid } from './output-grid.ts';
+import { valueAt } from '../solver/solution.ts';
 
 /**
  * Writes the probes' values at each output row: into Float64Array columns when they are
@@ -25,7 +26,7 @@ export class OutputRecorder {
   /** Record output row `index` from the solution `x` at that row's time. */
   record(index: number, x: Float64Array): void {
     const t = this.grid.time(index);
-    for (let p = 0; p < this.probes.length; p++) this.row[p] = this.probes[p] >= 0 ? x[this.probes[p]] : 0;
+    for (let p = 0; p < this.probes.length; p++) this.row[p] = valueAt(x, this.probes[p]);
     if (this.keep) {
       this.time[index] = t;
       for (let p = 0; p < this.probes.length; p++) this.columns[p][index] = this.row[p];

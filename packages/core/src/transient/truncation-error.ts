@@ -27,11 +27,6 @@ export class TruncationError {
     this.scale = new Float64Array(size);
   }
 
-  /** Points available for a predictor: the order of the estimate that can be made now. */
-  get pointsSinceCorner(): number {
-    return this.count;
-  }
-
   /** Start afresh at a corner (or at t = 0) with its solution. */
   restart(t: number, x: Float64Array): void {
     this.count = 0;

@@ -6,6 +6,7 @@ import { SampleSchedule } from './sample-schedule.ts';
 import { Transfer } from './transfer.ts';
 import { SeededNoise } from './noise.ts';
 import { encode } from './coding.ts';
+import { across } from '../../solver/solution.ts';
 
 /**
  * One converter watching the run. Its sample instants are landing points of the stepper, so
@@ -87,11 +88,11 @@ export class AdcSampler implements StepObserver {
   }
 
   private input(x: Float64Array): number {
-    return at(x, this.inputPlus) - at(x, this.inputMinus);
+    return across(x, this.inputPlus, this.inputMinus);
   }
 
   private convert(k: number, x: Float64Array): void {
-    const held = at(x, this.heldPlus) - at(x, this.heldMinus);
+    const held = across(x, this.heldPlus, this.heldMinus);
     const input = this.input(x);
     const t = this.transfer;
     const raw = t.unbounded(held, this.noise.next());
@@ -170,8 +171,4 @@ function largestDifference(code: Int32Array, ideal: Int32Array, time: Float64Arr
   for (let r = 0; r < code.length; r++) if (worst < 0 || Math.abs(code[r] - ideal[r]) > Math.abs(code[worst] - ideal[worst])) worst = r;
   if (worst < 0) return undefined;
   return { codes: code[worst] - ideal[worst], index: worst, time: time[worst], read: code[worst], ideal: ideal[worst] };
-}
-
-function at(x: Float64Array, index: number): number {
-  return index >= 0 ? x[index] : 0;
 }

@@ -1,5 +1,6 @@
 import type { ObserverContext, StepObserver } from '../../transient/observer.ts';
 import { formatSI } from '../../units/format.ts';
+import { valueAt } from '../../solver/solution.ts';
 import type { ReportWarning } from './types.ts';
 
 /** Consecutive sign changes of the step-to-step difference that count as the method's oscillation. */
@@ -36,7 +37,7 @@ export class TwoStepGuard implements StepObserver {
 
   accepted(t: number, x: Float64Array): void {
     for (let i = 0; i < this.indices.length; i++) {
-      const v = this.indices[i] >= 0 ? x[this.indices[i]] : 0;
+      const v = valueAt(x, this.indices[i]);
       const diff = v - this.previous[i];
       const alternates = Math.abs(diff) > this.floor + this.relativeFloor * Math.abs(v) && diff * this.lastDiff[i] < 0;
       this.runs[i] = alternates ? this.runs[i] + 1 : 0;
