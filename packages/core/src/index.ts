@@ -8,9 +8,9 @@
 export { readCircuit, parseCircuit, buildCircuit } from './circuit/parse-circuit.ts';
 export type { ParseOptions, ReadCircuitResult } from './circuit/parse-circuit.ts';
 export type { Circuit, SimulateSettings } from './circuit/circuit.ts';
-export { CircuitError, formatIssue } from './circuit/issue.ts';
-export type { CircuitIssue, SourcePosition } from './circuit/issue.ts';
-export type { ValueReader, MapReader, ReadContext, NumberLimits } from './circuit/reader.ts';
+export { CircuitError, formatIssue } from './reading/issue.ts';
+export type { CircuitIssue, SourcePosition } from './reading/issue.ts';
+export type { ValueReader, MapReader, ReadContext, NumberLimits } from './reading/reader.ts';
 
 export { parseQuantity, formatSI } from './units/index.ts';
 export type { ParsedQuantity } from './units/index.ts';

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { readCircuit } from '../src/circuit/parse-circuit.ts';
-import { formatIssue } from '../src/circuit/issue.ts';
+import { formatIssue } from '../src/reading/issue.ts';
 import { isClosed, nextEdge, type SwitchSchedule } from '../src/parts/switch.ts';
 
 function messages(part: string): string[] {

@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import fc from 'fast-check';
 import { buildCircuit, readCircuit } from '../src/circuit/parse-circuit.ts';
-import { CircuitError, type CircuitIssue } from '../src/circuit/issue.ts';
+import { CircuitError, type CircuitIssue } from '../src/reading/issue.ts';
 
 // An invented circuit to mutate.
 const seed = `circuit: invented-mutation-seed

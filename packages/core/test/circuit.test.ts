@@ -1,7 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { buildCircuit, parseCircuit, readCircuit } from '../src/circuit/parse-circuit.ts';
-import { CircuitError, formatIssue, type CircuitIssue } from '../src/circuit/issue.ts';
-import { editDistance } from '../src/circuit/suggest.ts';
+import { CircuitError, formatIssue, type CircuitIssue } from '../src/reading/issue.ts';
+import { editDistance } from '../src/reading/suggest.ts';
 
 // All circuits here are invented for the tests.
 const filter = `circuit: invented-test-filter

@@ -1,10 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import { LineCounter, parseDocument } from 'yaml';
 import { readStimulus } from '../src/waves/index.ts';
-import { IssueSink, YamlValue } from '../src/circuit/yaml-reader.ts';
-import type { ReadContext } from '../src/circuit/reader.ts';
+import { IssueSink, YamlValue } from '../src/reading/yaml-reader.ts';
+import type { ReadContext } from '../src/reading/reader.ts';
 import { quantities } from '../src/units/quantity.ts';
-import { formatIssue } from '../src/circuit/issue.ts';
+import { formatIssue } from '../src/reading/issue.ts';
 
 /** Read a source value written as YAML, as a voltage source's `voltage:` would be. */
 function read(text: string, context: ReadContext = {}) {

@@ -1,5 +1,5 @@
 import type { PartSpecBase } from '../parts/part-kind.ts';
-import type { AdcSpec } from '../analysis/adc/adc-spec.ts';
+import type { AdcSpec } from './adc-spec.ts';
 
 /** How to step through time; every value in SI base units. */
 export interface SimulateSettings {

@@ -1,7 +1,7 @@
 import type { PartSpecBase, PinRef } from '../parts/part-kind.ts';
-import type { IssueSink } from './yaml-reader.ts';
-import type { ValueReader } from './reader.ts';
-import { closest } from './suggest.ts';
+import type { IssueSink } from '../reading/yaml-reader.ts';
+import type { ValueReader } from '../reading/reader.ts';
+import { closest } from '../reading/suggest.ts';
 
 /** The ground node's name. */
 export const ground = 'gnd';

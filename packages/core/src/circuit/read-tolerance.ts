@@ -1,4 +1,4 @@
-import type { MapReader, ValueReader } from './reader.ts';
+import type { MapReader, ValueReader } from '../reading/reader.ts';
 import type { PartKind, PartSpecBase } from '../parts/part-kind.ts';
 import { deviated, distributions, type Distribution, type TolerableValue, type Tolerance } from '../parts/tolerance.ts';
 import { quantities } from '../units/quantity.ts';

@@ -1,5 +1,5 @@
 import type { Mna, StepInfo } from './device.ts';
-import { stampConductance, stampCurrent } from '../solver/stamps.ts';
+import { stampConductance, stampCurrent } from './stamps.ts';
 
 /**
  * Companion model of a capacitance over one step: a conductance g with a history current,

@@ -1,7 +1,7 @@
 import { quantities } from '../units/quantity.ts';
 import { readStimulus } from '../waves/index.ts';
 import type { Wave } from '../waves/wave.ts';
-import { stampCurrent } from '../solver/stamps.ts';
+import { stampCurrent } from './stamps.ts';
 import type { Binder, Device, Link, Mna, StepInfo } from './device.ts';
 import type { PartKind, PartSpecBase } from './part-kind.ts';
 import { sourceTolerance } from './source-tolerance.ts';

@@ -1,6 +1,6 @@
 import { quantities } from '../units/quantity.ts';
-import { stampBranchIncidence, stampBranchVoltage } from '../solver/stamps.ts';
-import { across } from '../solver/solution.ts';
+import { stampBranchIncidence, stampBranchVoltage } from './stamps.ts';
+import { across } from './solution.ts';
 import type { Binder, Device, Link, Mna, StepInfo } from './device.ts';
 import type { PartKind, PartSpecBase } from './part-kind.ts';
 import { tolerableField } from './tolerance.ts';

@@ -1,5 +1,5 @@
-import type { MapReader, ValueReader } from '../circuit/reader.ts';
-import { suggestion } from '../circuit/suggest.ts';
+import type { MapReader, ValueReader } from '../reading/reader.ts';
+import { suggestion } from '../reading/suggest.ts';
 import { parseQuantity } from '../units/si.ts';
 import { quantities } from '../units/quantity.ts';
 import type { PinRef } from './part-kind.ts';

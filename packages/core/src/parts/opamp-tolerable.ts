@@ -2,7 +2,7 @@ import { quantities } from '../units/quantity.ts';
 import type { OpampParameters } from './opamp-presets.ts';
 import type { OpampSpec } from './opamp-spec.ts';
 import type { TolerableValue } from './tolerance.ts';
-import type { NumberLimits } from '../circuit/reader.ts';
+import type { NumberLimits } from '../reading/reader.ts';
 import type { Quantity } from '../units/quantity.ts';
 
 type Numeric = 'gbw' | 'slew' | 'offset';

@@ -1,6 +1,6 @@
-import { stampBranchIncidence, stampConductance, stampCurrent } from '../solver/stamps.ts';
+import { stampBranchIncidence, stampConductance, stampCurrent } from './stamps.ts';
 import { CapacitorCompanion } from './capacitor-companion.ts';
-import { across, valueAt } from '../solver/solution.ts';
+import { across, valueAt } from './solution.ts';
 import type { Binder, Device, Link, Mna, StepInfo } from './device.ts';
 import type { PartKind } from './part-kind.ts';
 import { nodeOf } from './pins.ts';

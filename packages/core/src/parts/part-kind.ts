@@ -1,4 +1,4 @@
-import type { MapReader, ReadContext, ValueReader } from '../circuit/reader.ts';
+import type { MapReader, ReadContext, ValueReader } from '../reading/reader.ts';
 import type { Device } from './device.ts';
 import type { TolerableValue, Tolerance } from './tolerance.ts';
 

@@ -1,4 +1,4 @@
-import type { MapReader } from '../circuit/reader.ts';
+import type { MapReader } from '../reading/reader.ts';
 import type { PinRef } from './part-kind.ts';
 
 /**

@@ -1,5 +1,5 @@
 import { quantities } from '../units/quantity.ts';
-import { stampConductance } from '../solver/stamps.ts';
+import { stampConductance } from './stamps.ts';
 import type { Binder, Device, Link, Mna } from './device.ts';
 import type { PartKind, PartSpecBase } from './part-kind.ts';
 import { tolerableField } from './tolerance.ts';

@@ -1,7 +1,7 @@
-import type { MapReader, ValueReader } from '../circuit/reader.ts';
+import type { MapReader, ValueReader } from '../reading/reader.ts';
 import { quantities } from '../units/quantity.ts';
 import { formatSI } from '../units/format.ts';
-import { stampConductance } from '../solver/stamps.ts';
+import { stampConductance } from './stamps.ts';
 import { periodIndex } from '../waves/periodic.ts';
 import type { Binder, Device, Link, Mna, StepInfo } from './device.ts';
 import type { PartKind, PartSpecBase } from './part-kind.ts';

@@ -1,4 +1,4 @@
-import type { NumberLimits } from '../circuit/reader.ts';
+import type { NumberLimits } from '../reading/reader.ts';
 import type { Quantity } from '../units/quantity.ts';
 
 /** How draws spread between a tolerance's limits. */

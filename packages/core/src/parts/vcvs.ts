@@ -1,5 +1,5 @@
 import { quantities } from '../units/quantity.ts';
-import { stampBranchIncidence, stampBranchVoltage } from '../solver/stamps.ts';
+import { stampBranchIncidence, stampBranchVoltage } from './stamps.ts';
 import type { Binder, Device, Link, Mna } from './device.ts';
 import type { PartKind, PartSpecBase } from './part-kind.ts';
 import { tolerableField } from './tolerance.ts';

@@ -1,7 +1,7 @@
 import { quantities } from '../units/quantity.ts';
 import { readStimulus } from '../waves/index.ts';
 import type { Wave } from '../waves/wave.ts';
-import { stampBranchIncidence, stampBranchVoltage } from '../solver/stamps.ts';
+import { stampBranchIncidence, stampBranchVoltage } from './stamps.ts';
 import type { Binder, Device, Link, Mna, StepInfo } from './device.ts';
 import type { PartKind, PartSpecBase } from './part-kind.ts';
 import { sourceTolerance } from './source-tolerance.ts';

@@ -1,5 +1,5 @@
 import type { OutputGrid } from './output-grid.ts';
-import { valueAt } from '../solver/solution.ts';
+import { valueAt } from '../parts/solution.ts';
 
 /**
  * Writes the probes' values at each output row: into Float64Array columns when they are

@@ -1,4 +1,4 @@
-import type { ValueReader } from '../circuit/reader.ts';
+import type { ValueReader } from '../reading/reader.ts';
 import type { Quantity } from '../units/quantity.ts';
 import { quantities } from '../units/quantity.ts';
 import { parseQuantity } from '../units/si.ts';

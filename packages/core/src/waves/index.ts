@@ -1,5 +1,5 @@
-import type { ReadContext, ValueReader } from '../circuit/reader.ts';
-import { selectKind } from '../circuit/select-kind.ts';
+import type { ReadContext, ValueReader } from '../reading/reader.ts';
+import { selectKind } from '../reading/select-kind.ts';
 import type { Quantity } from '../units/quantity.ts';
 import type { Wave, WaveKind } from './wave.ts';
 import { ConstantWave } from './constant.ts';

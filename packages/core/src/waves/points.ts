@@ -1,4 +1,4 @@
-import type { MapReader, ValueReader } from '../circuit/reader.ts';
+import type { MapReader, ValueReader } from '../reading/reader.ts';
 import { quantities } from '../units/quantity.ts';
 import { formatSI } from '../units/format.ts';
 import type { Wave, WaveKind } from './wave.ts';

@@ -1,5 +1,5 @@
 import type { AdcReport } from './adc-report.ts';
-import type { AdcSpec } from './adc-spec.ts';
+import type { AdcSpec } from '../../circuit/adc-spec.ts';
 
 /**
  * The codes one converter returned, one row per reported code: `index` from 0, the `time` of

@@ -1,12 +1,12 @@
 import type { ObserverContext, StepObserver } from '../../transient/observer.ts';
-import type { AdcSpec } from './adc-spec.ts';
+import type { AdcSpec } from '../../circuit/adc-spec.ts';
 import type { AdcReadout } from './adc-readout.ts';
 import type { ClippedSamples, CodeError, TimeInterval } from './adc-report.ts';
 import { SampleSchedule } from './sample-schedule.ts';
 import { Transfer } from './transfer.ts';
 import { SeededNoise } from './noise.ts';
 import { encode } from './coding.ts';
-import { across } from '../../solver/solution.ts';
+import { across } from '../../parts/solution.ts';
 
 /**
  * One converter watching the run. Its sample instants are landing points of the stepper, so

@@ -1,4 +1,4 @@
-import type { AdcCoding } from './adc-spec.ts';
+import type { AdcCoding } from '../../circuit/adc-spec.ts';
 
 /**
  * A code 0 .. 2^N - 1 as the converter writes it. Unsigned and offset binary are the same

@@ -1,10 +1,10 @@
-export { readAdcSection } from './read-adc.ts';
-export type { AdcSection } from './read-adc.ts';
+export { readAdcSection } from '../../circuit/read-adc.ts';
+export type { AdcSection } from '../../circuit/read-adc.ts';
 export { AdcSampler } from './adc-sampler.ts';
 export { Transfer } from './transfer.ts';
 export { encode, codeLimits } from './coding.ts';
 export { SeededNoise } from './noise.ts';
 export { SampleSchedule } from './sample-schedule.ts';
-export type { AdcSpec, AdcCoding, AdcRounding, SampleTimes, SamplingSpec } from './adc-spec.ts';
+export type { AdcSpec, AdcCoding, AdcRounding, SampleTimes, SamplingSpec } from '../../circuit/adc-spec.ts';
 export type { AdcReadout } from './adc-readout.ts';
 export type { AdcReport, ClippedSamples, CodeError, TimeInterval } from './adc-report.ts';

@@ -1,4 +1,4 @@
-import type { SampleTimes } from './adc-spec.ts';
+import type { SampleTimes } from '../../circuit/adc-spec.ts';
 
 /**
  * The sample instants of one converter within a run of `duration`. Instant k of a rate is

@@ -1,4 +1,4 @@
-import type { AdcSpec } from './adc-spec.ts';
+import type { AdcSpec } from '../../circuit/adc-spec.ts';
 
 /**
  * The converter's transfer function, from volts to a code 0 .. 2^N - 1. The ideal one is

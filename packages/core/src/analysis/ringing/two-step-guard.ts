@@ -1,6 +1,6 @@
 import type { ObserverContext, StepObserver } from '../../transient/observer.ts';
 import { formatSI } from '../../units/format.ts';
-import { valueAt } from '../../solver/solution.ts';
+import { valueAt } from '../../parts/solution.ts';
 import type { ReportWarning } from './types.ts';
 
 /** Consecutive sign changes of the step-to-step difference that count as the method's oscillation. */

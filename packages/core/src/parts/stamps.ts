@@ -1,4 +1,4 @@
-import type { Mna } from '../parts/device.ts';
+import type { Mna } from './device.ts';
 
 /** A conductance `g` between unknowns `a` and `b` (either may be ground, -1). */
 export function stampConductance(m: Mna, a: number, b: number, g: number): void {

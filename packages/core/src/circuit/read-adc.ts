@@ -1,12 +1,12 @@
-import type { MapReader, ValueReader } from '../../circuit/reader.ts';
-import { suggestion } from '../../circuit/suggest.ts';
-import type { PartSpecBase } from '../../parts/part-kind.ts';
-import { quantities } from '../../units/quantity.ts';
-import type { Quantity } from '../../units/quantity.ts';
-import { formatSI } from '../../units/format.ts';
-import { checkTimes } from '../../waves/points.ts';
+import type { MapReader, ValueReader } from '../reading/reader.ts';
+import { suggestion } from '../reading/suggest.ts';
+import type { PartSpecBase } from '../parts/part-kind.ts';
+import { quantities } from '../units/quantity.ts';
+import type { Quantity } from '../units/quantity.ts';
+import { formatSI } from '../units/format.ts';
+import { checkTimes } from '../waves/points.ts';
 import type { AdcSpec, SampleTimes, SamplingSpec } from './adc-spec.ts';
-import { samplingParts } from './sampling-parts.ts';
+import { samplingParts } from './adc-sampling-parts.ts';
 
 /** Converter errors and noise are written in LSB: `offset: 1.5` or `offset: 1.5LSB`. */
 const lsbs: Quantity = { name: 'number of LSB', units: ['LSB'] };

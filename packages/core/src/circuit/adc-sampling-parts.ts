@@ -1,9 +1,9 @@
-import type { PartSpecBase, PinRef } from '../../parts/part-kind.ts';
-import type { SwitchSchedule, SwitchSpec } from '../../parts/switch.ts';
-import { defaultOffResistance } from '../../parts/switch.ts';
-import type { CapacitorSpec } from '../../parts/capacitor.ts';
-import type { VoltageSourceSpec } from '../../parts/voltage-source.ts';
-import { ConstantWave } from '../../waves/constant.ts';
+import type { PartSpecBase, PinRef } from '../parts/part-kind.ts';
+import type { SwitchSchedule, SwitchSpec } from '../parts/switch.ts';
+import { defaultOffResistance } from '../parts/switch.ts';
+import type { CapacitorSpec } from '../parts/capacitor.ts';
+import type { VoltageSourceSpec } from '../parts/voltage-source.ts';
+import { ConstantWave } from '../waves/constant.ts';
 import type { SamplingSpec, SampleTimes } from './adc-spec.ts';
 
 /** On resistance of the switch that sets the capacitor to its precharge voltage. */
