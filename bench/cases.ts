@@ -18,7 +18,7 @@ parts:
   R5: { resistor: 10k, between: [n4, n5] }
   C5: { capacitor: 10n, between: [n5, gnd] }
 simulate: { duration: ${steps * step}, output-step: ${(steps * step) / 100}, fixed-step: ${step} }
-probes: [n5]
+record: [n5]
 `;
 }
 
@@ -30,7 +30,7 @@ export function rcLadder(sections: number, steps: number, step: number): string 
     lines.push(`  C${i}: { capacitor: 10n, between: [n${i}, gnd] }`);
   }
   lines.push(`simulate: { duration: ${steps * step}, output-step: ${(steps * step) / 100}, fixed-step: ${step} }`);
-  lines.push(`probes: [n${sections}]`);
+  lines.push(`record: [n${sections}]`);
   return lines.join('\n');
 }
 
@@ -44,6 +44,6 @@ parts:
   RF: { resistor: 10k, between: [sum, out] }
   AMP: { opamp: general-purpose, plus: gnd, minus: sum, out: out, supply: [-12, 12] }
 simulate: { duration: ${periods}m, output-step: 1u }
-probes: [out]
+record: [out]
 `;
 }

@@ -14,7 +14,7 @@ parts:
   R1: { resistor: 1k, between: [in, out] }
   C1: { capacitor: 1u, between: [out, gnd] }
 simulate: { duration: 1m, output-step: 10u }
-probes: [out]
+record: [out]
 `;
 
 /** A fresh folder for one test, removed when it ends (safe for concurrent tests). */
@@ -83,8 +83,8 @@ describe('bad circuit files exit 2 with file:line:column, a hint, and no output'
       says: /otu[\s\S]*\bout\b/,
     },
     {
-      name: 'a probe naming a misspelt node',
-      text: good.replace('probes: [out]', 'probes: [otu]'),
+      name: 'a record entry naming a misspelt node',
+      text: good.replace('record: [out]', 'record: [otu]'),
       at: 'otu',
       says: /otu[\s\S]*\bout\b/,
     },
@@ -131,17 +131,17 @@ describe('usage errors exit 2', () => {
 });
 
 describe('a circuit that fails in simulation', () => {
-  test('a node with no DC path to ground exits 1, names the node, and writes nothing', async (context) => {
+  test('a floating node exits 1, names the node, and writes nothing', async (context) => {
     const scratch = scratchFor(context);
-    // Two capacitors in series leave `mid` with no DC path to ground: the operating point's
-    // matrix is singular there (common practice: every node needs a DC path to ground).
+    // Two capacitors in series leave nothing conducting between `mid` and ground at DC: the operating point's
+    // matrix is singular there (common practice: every node needs a conducting path to ground at DC).
     const text = `circuit: floating-middle
 parts:
   SRC: { voltage: { sine: { amplitude: 1, frequency: 1k } }, between: [in, gnd] }
   C1: { capacitor: 1u, between: [in, mid] }
   C2: { capacitor: 1u, between: [mid, gnd] }
 simulate: { duration: 1m, output-step: 10u }
-probes: [mid]
+record: [mid]
 `;
     const file = join(scratch, 'floating.yaml');
     writeFileSync(file, text);

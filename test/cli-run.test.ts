@@ -7,9 +7,9 @@ import { repoRoot, runCli } from './support/run-cli.ts';
 // End-to-end runs of the fixtures through the real engine. Durations and steps below are
 // those written in the fixture files (checked here independently of the CLI's own report).
 const fixtures = [
-  { file: 'demo-strain-front-end.yaml', probes: ['beam', 'amp', 'adc'], duration: 24e-3, outputStep: 10e-6, files: ['adc-TRAY.csv'] },
-  { file: 'supply-ringing.yaml', probes: ['feed', 'rail'], duration: 500e-6, outputStep: 500e-9, files: [] },
-  { file: 'sensor-cable-rl.yaml', probes: ['drive', 'probe'], duration: 100e-6, outputStep: 100e-9, files: [] },
+  { file: 'demo-strain-front-end.yaml', recorded: ['beam', 'amp', 'adc'], duration: 24e-3, outputStep: 10e-6, files: ['adc-TRAY.csv'] },
+  { file: 'supply-ringing.yaml', recorded: ['feed', 'rail'], duration: 500e-6, outputStep: 500e-9, files: [] },
+  { file: 'sensor-cable-rl.yaml', recorded: ['drive', 'sensor'], duration: 100e-6, outputStep: 100e-9, files: [] },
 ];
 
 let scratch: string;
@@ -20,7 +20,7 @@ afterEach(() => {
   rmSync(scratch, { recursive: true, force: true });
 });
 
-describe.each(fixtures)('voltcast run fixtures/$file', ({ file, probes, duration, outputStep, files }) => {
+describe.each(fixtures)('voltcast run fixtures/$file', ({ file, recorded, duration, outputStep, files }) => {
   test('writes waveforms.csv on the output grid and report.json with the run counters', async () => {
     const out = join(scratch, 'result');
     const { code, stdout, stderr } = await runCli(['run', join(repoRoot, 'fixtures', file), '--out', out]);
@@ -30,11 +30,11 @@ describe.each(fixtures)('voltcast run fixtures/$file', ({ file, probes, duration
     expect(readdirSync(scratch)).toEqual(['result']); // the staging folder is gone
 
     const lines = readFileSync(join(out, 'waveforms.csv'), 'utf8').trimEnd().split('\n');
-    expect(lines[0]).toBe(['time', ...probes].join(','));
+    expect(lines[0]).toBe(['time', ...recorded].join(','));
     const rows = lines.slice(1).map((line) => line.split(',').map(Number));
     expect(rows.length).toBe(Math.round(duration / outputStep) + 1);
     for (const row of rows) {
-      expect(row.length).toBe(probes.length + 1);
+      expect(row.length).toBe(recorded.length + 1);
       for (const value of row) expect(Number.isFinite(value)).toBe(true);
     }
     expect(rows[0][0]).toBe(0);
@@ -47,13 +47,13 @@ describe.each(fixtures)('voltcast run fixtures/$file', ({ file, probes, duration
     expect(report.settings.duration).toBeCloseTo(duration, 15);
     expect(report.stats.acceptedSteps).toBeGreaterThanOrEqual(rows.length - 1);
     expect(report.stats.factorizations).toBeGreaterThan(0);
-    expect(Object.keys(report.probes)).toEqual(probes);
-    // The per-probe extremes agree with the CSV they summarise.
-    probes.forEach((probe, i) => {
+    expect(Object.keys(report.recorded)).toEqual(recorded);
+    // The per-node extremes agree with the CSV they summarise.
+    recorded.forEach((node, i) => {
       const column = rows.map((row) => row[i + 1]);
-      expect(report.probes[probe].min).toBeCloseTo(Math.min(...column), 6);
-      expect(report.probes[probe].max).toBeCloseTo(Math.max(...column), 6);
-      expect(report.probes[probe].final).toBeCloseTo(column.at(-1)!, 6);
+      expect(report.recorded[node].min).toBeCloseTo(Math.min(...column), 6);
+      expect(report.recorded[node].max).toBeCloseTo(Math.max(...column), 6);
+      expect(report.recorded[node].final).toBeCloseTo(column.at(-1)!, 6);
     });
 
     expect(readFileSync(join(out, 'report.txt'), 'utf8')).toContain(report.circuit);

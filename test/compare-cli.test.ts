@@ -20,20 +20,20 @@ afterAll(() => rmSync(scratch, { recursive: true, force: true }));
 
 describe('voltcast compare', () => {
   test('passes the good capture once aligned (exit 0) and fails it unaligned (exit 1)', async () => {
-    const aligned = await runCli(['compare', capture('good'), envelopeFile, '--probe', 'adc', '--shift', 'auto']);
+    const aligned = await runCli(['compare', capture('good'), envelopeFile, '--signal', 'adc', '--shift', 'auto']);
     expect(aligned.code).toBe(0);
     // The synthetic capture was made with a 37 µs delay (see its header).
     expect(aligned.stdout).toMatch(/^PASS adc: 100\.00% of \d+ samples inside \(shift 37(\.\d+)? µs/);
-    const given = await runCli(['compare', capture('good'), envelopeFile, '--probe', 'adc', '--shift', '37u']);
+    const given = await runCli(['compare', capture('good'), envelopeFile, '--signal', 'adc', '--shift', '37u']);
     expect(given.code).toBe(0);
-    const unaligned = await runCli(['compare', capture('good'), envelopeFile, '--probe', 'adc']);
+    const unaligned = await runCli(['compare', capture('good'), envelopeFile, '--signal', 'adc']);
     expect(unaligned.code).toBe(1);
     expect(unaligned.stdout).toMatch(/^FAIL adc/);
   });
 
   test('fails the dropout capture at the dropout, with JSON and a plot', async () => {
     const plot = join(scratch, 'dropout.svg');
-    const { code, stdout } = await runCli(['compare', capture('dropout'), envelopeFile, '--probe', 'adc', '--column', 'adc', '--shift', 'auto', '--json', '--plot', plot]);
+    const { code, stdout } = await runCli(['compare', capture('dropout'), envelopeFile, '--signal', 'adc', '--column', 'adc', '--shift', 'auto', '--json', '--plot', plot]);
     expect(code).toBe(1);
     const verdict = JSON.parse(stdout);
     expect(verdict.pass).toBe(false);
@@ -49,12 +49,12 @@ describe('voltcast compare', () => {
   test('reports bad input with exit 2 and where it is', async () => {
     const broken = join(scratch, 'broken.csv');
     writeFileSync(broken, 'time,adc\ns,V\n0,1\n1e-5,oops\n');
-    const bad = await runCli(['compare', broken, envelopeFile, '--probe', 'adc']);
+    const bad = await runCli(['compare', broken, envelopeFile, '--signal', 'adc']);
     expect(bad.code).toBe(2);
     expect(bad.stderr).toContain(`${broken}: row 4, column 'adc': 'oops' is not a number`);
-    const probe = await runCli(['compare', capture('good'), envelopeFile]);
-    expect(probe.code).toBe(2);
-    expect(probe.stderr).toMatch(/holds the probes filt, adc\n  choose one with --probe NAME/);
+    const unnamed = await runCli(['compare', capture('good'), envelopeFile]);
+    expect(unnamed.code).toBe(2);
+    expect(unnamed.stderr).toMatch(/holds the signals filt, adc\n  choose one with --signal NAME/);
     const missing = await runCli(['compare', join(scratch, 'nothing.csv'), envelopeFile]);
     expect(missing.code).toBe(2);
   });

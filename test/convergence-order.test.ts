@@ -22,7 +22,7 @@ parts:
   R1: { resistor: 1k, between: [in, out] }
   C1: { capacitor: 1u, between: [out, gnd] }
 simulate: { duration: 10m, output-step: 100u, fixed-step: ${h} }
-probes: [out]
+record: [out]
 `);
     return maxError(result.time, column(result, 'out'), exact);
   };

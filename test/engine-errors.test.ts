@@ -13,7 +13,7 @@ function failure(yaml: string): SimulationError {
 }
 
 describe('unsolvable circuits are reported by cause', () => {
-  it('a node with no DC path to ground names the node and the capacitors around it', () => {
+  it('a floating node (no conducting path to ground at DC) names the node and the capacitors around it', () => {
     const e = failure(`
 circuit: floating
 parts:
@@ -22,13 +22,13 @@ parts:
   C2: { capacitor: 1u, between: [mid, gnd] }
 simulate: { duration: 1m }
 `);
-    expect(e.message).toBe('node mid has no DC path to gnd');
+    expect(e.message).toBe('node mid floats: nothing that conducts at DC (resistor, source, inductor) joins it to gnd, so its steady voltage is undefined (only C1 and C2 touch it)');
     expect(e.nodes).toEqual(['mid']);
     expect(e.parts).toEqual(['C1', 'C2']);
     expect(Number.isNaN(e.time)).toBe(true);
   });
 
-  it('a held capacitor gives that node its DC path', () => {
+  it('a held capacitor fixes that node at DC', () => {
     expect(() =>
       runText(`
 circuit: held

@@ -12,7 +12,7 @@ parts:
   RBOT: { resistor: 10k, tolerance: 1%, distribution: normal, between: [mid, gnd] }
   CF: { capacitor: 1n, tolerance: 10%, between: [mid, gnd] }
 simulate: { duration: 0.5m, output-step: 5u }
-probes: [mid]
+record: [mid]
 adc:
   CONV: { input: mid, bits: 12, range: [0, 5], rate: 20k }
 `;

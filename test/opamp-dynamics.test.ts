@@ -12,9 +12,9 @@ parts:
   SRC: { voltage: { points: [[0, 0], [10u, 0], [10.001u, 5m]] }, between: [in, gnd] }
   RG: { resistor: 1k, between: [sum, gnd] }
   RF: { resistor: 9k, between: [sum, out] }
-  AMP: { opamp: { preset: general-purpose, offset: 0, bias: 0 }, plus: in, minus: sum, out: out, supply: [-12, 12] }
+  AMP: { opamp: { preset: general-purpose, gain: 100dB, gbw: 1MHz, offset: 0, bias: 0 }, plus: in, minus: sum, out: out, supply: [-12, 12] }
 simulate: { duration: 40u, output-step: 5n }
-probes: [out]
+record: [out]
 `);
     const out = column(result, 'out');
     const final = out[out.length - 1];
@@ -32,10 +32,10 @@ probes: [out]
 circuit: slew-step
 parts:
   SRC: { voltage: { points: [[0, 0], [5u, 0], [5.01u, 5]] }, between: [in, gnd] }
-  AMP: { opamp: { preset: general-purpose, offset: 0 }, plus: in, minus: out, out: out, supply: [-10, 10] }
+  AMP: { opamp: { preset: general-purpose, slew: 0.5V/us, offset: 0 }, plus: in, minus: out, out: out, supply: [-10, 10] }
   RL: { resistor: 10k, between: [out, gnd] }
 simulate: { duration: 25u, output-step: 10n }
-probes: [out]
+record: [out]
 `);
     const out = column(result, 'out');
     const t1 = crossing(result.time, out, 1, true);
@@ -53,10 +53,10 @@ probes: [out]
 circuit: full-power
 parts:
   SRC: { voltage: { sine: { amplitude: 5, frequency: ${frequency} } }, between: [in, gnd] }
-  AMP: { opamp: { preset: general-purpose, offset: 0, gbw: 10MHz }, plus: in, minus: out, out: out, supply: [-10, 10] }
+  AMP: { opamp: { preset: general-purpose, slew: 0.5V/us, offset: 0, gbw: 10MHz }, plus: in, minus: out, out: out, supply: [-10, 10] }
   RL: { resistor: 10k, between: [out, gnd] }
 simulate: { duration: ${3 / frequency}, output-step: ${1 / frequency / 2000} }
-probes: [out]
+record: [out]
 `);
       return maxSlope(result.time, column(result, 'out'), 1 / frequency, 3 / frequency);
     };
@@ -81,7 +81,7 @@ parts:
   RF: { resistor: 190k, between: [sum, out] }
   AMP: { opamp: { preset: general-purpose, headroom: 2 }, plus: in, minus: sum, out: out, supply: [-10, 10] }
 simulate: { duration: 4m, output-step: 2u }
-probes: [out]
+record: [out]
 `);
     const out = column(result, 'out');
     // Common practice: an amplifier on +/-10 V that swings to within 2 V of its rails saturates at +/-8 V.
@@ -98,7 +98,7 @@ parts:
   AMP: { opamp: rail-to-rail, plus: in, minus: gnd, out: out, supply: [gnd, vcc] }
   RL: { resistor: 100k, between: [out, gnd] }
 simulate: { duration: 10u }
-probes: [out]
+record: [out]
 `);
     // Open loop with +1 V input: the output saturates 50 mV below the 5 V supply node (preset headroom).
     expect(column(result, 'out')[0]).toBeCloseTo(4.95, 2);
@@ -113,7 +113,7 @@ parts:
   RF: { resistor: 9k, between: [sum, iout] }
   I: { opamp: { preset: general-purpose, offset: 2m, bias: 0 }, plus: gnd, minus: sum, out: iout, supply: [-12, 12] }
 simulate: { duration: 10u }
-probes: [fout, iout]
+record: [fout, iout]
 `);
     // Offset voltage referred to the input, amplified by the noise gain (op-amp textbooks).
     expect(Math.abs(column(result, 'fout')[0] / 2e-3 - 1)).toBeLessThan(0.01);
@@ -132,7 +132,7 @@ parts:
   R2: { resistor: 10k, between: [pos, gnd] }
   CMP: { opamp: general-purpose, plus: pos, minus: in, out: out, supply: [-12, 12] }
 simulate: { duration: 2m, output-step: 0.5u }
-probes: [in, out]
+record: [in, out]
 `);
     const out = column(result, 'out');
     const input = column(result, 'in');
@@ -153,10 +153,10 @@ circuit: starts-saturated
 parts:
   SRC: { voltage: 3, between: [in, gnd] }
   REF: { voltage: 1, between: [ref, gnd] }
-  CMP: { opamp: jfet-input, plus: in, minus: ref, out: out, supply: [-12, 12] }
+  CMP: { opamp: { preset: jfet-input, rout: 100 }, plus: in, minus: ref, out: out, supply: [-12, 12] }
   RL: { resistor: 10k, between: [out, gnd] }
 simulate: { duration: 10u }
-probes: [out]
+record: [out]
 `);
     // 2 V of differential input open loop: the output sits at 12 V - 1.5 V headroom, less rout·I (100 Ω into 10k).
     expect(result.operatingPoint.get('out')!).toBeCloseTo(10.5 * (10e3 / 10.1e3), 2);

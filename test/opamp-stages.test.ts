@@ -19,7 +19,7 @@ function dampingFromSwings(peaks: [number, number][]): number {
 }
 
 describe('differentiators and integrators', () => {
-  // R = 10k, C = 10n: f0 = 1/(2 pi R C) = 1.59 kHz; general-purpose GBW 1 MHz.
+  // R = 10k, C = 10n: f0 = 1/(2 pi R C) = 1.59 kHz; the fixtures set GBW 1 MHz.
   const f0 = 1 / (2 * Math.PI * 10e3 * 10e-9);
   const ringing = Math.sqrt(f0 * 1e6);
 

@@ -16,7 +16,7 @@ const circuit = buildCircuit({
     C1: { capacitor: '47n', between: ['out', 'gnd'] },
   },
   simulate: { duration: '3m', 'output-step': '5u' },
-  probes: ['in', 'out'],
+  record: ['in', 'out'],
   adc: { CONV: { input: 'out', bits: 8, range: [0, 3.3], rate: '20k' } },
 });
 
@@ -26,7 +26,7 @@ function paths(svg: string): { all: number; series: string[] } {
 }
 
 describe('SVG plots', () => {
-  it('draw a run as well-formed XML with one path per probe and per ADC', () => {
+  it('draw a run as well-formed XML with one path per recorded node and per ADC', () => {
     const run = runCircuit(circuit);
     const svg = renderFigure(runFigure(circuit, 'invented <plot> & co.yaml', run.transient, run.adcs));
     // Well-formedness per the XML 1.0 specification (checker in test/support).
@@ -50,7 +50,7 @@ describe('SVG plots', () => {
         AMP: { opamp: { preset: 'general-purpose', headroom: 2 }, plus: 'in', minus: 'sum', out: 'out', supply: [-10, 10] },
       },
       simulate: { duration: '4m', 'output-step': '4u' },
-      probes: ['in', 'out'],
+      record: ['in', 'out'],
     });
     const run = runCircuit(clipping);
     const svg = renderFigure(runFigure(clipping, 'clipping.yaml', run.transient, run.adcs, run.findings.saturation));
@@ -62,7 +62,7 @@ describe('SVG plots', () => {
     expect(run.findings.saturation.length).toBe(4);
   });
 
-  it('draw an envelope as a band and a nominal path per probe and per ADC', () => {
+  it('draw an envelope as a band and a nominal path per recorded node and per ADC', () => {
     const result = envelope(circuit, { corners: true });
     const svg = renderFigure(envelopeFigure(result, circuit.name, 'invented.yaml'));
     expect(xmlProblems(svg)).toEqual([]);

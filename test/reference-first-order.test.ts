@@ -12,7 +12,7 @@ parts:
   R1: { resistor: 1k, between: [in, out] }
   C1: { capacitor: 1u, between: [out, gnd] }
 simulate: { duration: 8m, output-step: 10u }
-probes: [out]
+record: [out]
 `);
     const error = maxError(result.time, column(result, 'out'), (t) => lagThroughEdge(t, 1e-3, 1e-3, 1.5e-3, 2));
     // Closed-form first-order response (any circuit theory textbook): 0.05% of 2 V = 1 mV.
@@ -28,7 +28,7 @@ parts:
   L1: { inductor: 10m, between: [in, mid] }
   R1: { resistor: 100, between: [mid, gnd] }
 simulate: { duration: 800u, output-step: 1u }
-probes: [mid]
+record: [mid]
 `);
     const error = maxError(result.time, column(result, 'mid'), (t) => lagThroughEdge(t, 100e-6, 10e-6, 11e-6, 1));
     // Closed-form first-order response (any circuit theory textbook): 0.05% of the 1 V full scale (10 mA through 100 Ω).

@@ -28,7 +28,7 @@ parts:
   R4: { resistor: ${p.R4}, between: [n3, n4] }
   C4: { capacitor: ${p.C4}, between: [n4, gnd] }
 simulate: { duration: ${duration}, output-step: ${outputStep} }
-probes: [n1, n2, n3, n4]
+record: [n1, n2, n3, n4]
 `);
 
   // State y = [v1, v2, iL, v3, v4]; Kirchhoff's current law at each capacitor node.

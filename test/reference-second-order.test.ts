@@ -25,7 +25,7 @@ parts:
   L1: { inductor: ${L}, between: [a, out] }
   C1: { capacitor: ${C}, between: [out, gnd] }
 simulate: { duration: 1.2m, output-step: 0.1u }
-probes: [out]
+record: [out]
 `);
   const v = column(result, 'out');
 

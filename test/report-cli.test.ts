@@ -56,7 +56,7 @@ parts:
   R1: { resistor: 1k, between: [in, out] }
   R2: { resistor: 100k, between: [out, gnd] }
 simulate: { duration: 2m, output-step: 10u }
-probes: [in, out]
+record: [in, out]
 adc:
   MCU: { input: out, bits: 12, range: [0, 3.3], rate: 20k }
 `);

@@ -5,10 +5,10 @@ export function runText(yaml: string): TransientResult {
   return simulate(parseCircuit(yaml, { fileName: 'inline.yaml' }));
 }
 
-/** A probe's column, failing loudly when absent. */
-export function column(result: TransientResult, probe: string): Float64Array {
-  const c = result.columns.get(probe);
-  if (c === undefined) throw new Error(`no column ${probe}`);
+/** A recorded node's column, failing loudly when absent. */
+export function column(result: TransientResult, node: string): Float64Array {
+  const c = result.columns.get(node);
+  if (c === undefined) throw new Error(`no column ${node}`);
   return c;
 }
 

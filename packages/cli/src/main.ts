@@ -17,7 +17,7 @@ Examples:
       write elsewhere and print nothing but errors
   voltcast envelope fixtures/envelope-rc-filter.yaml --runs 500 --seed 7 --corners --plot
       tolerance envelope; writes out/envelope-rc-filter-envelope/envelope.csv
-  voltcast compare capture.csv out/board-envelope/envelope.csv --probe adc --shift auto
+  voltcast compare capture.csv out/board-envelope/envelope.csv --signal adc --shift auto
       check a capture against an envelope: exit 0 pass, 1 fail
 
 Exit codes: 0 done, 1 the simulation failed, 2 bad input or usage.`;
@@ -60,8 +60,8 @@ function program(setOutcome: (code: number) => void): Command {
     .description('check a captured waveform against an envelope: exit 0 pass, 1 fail')
     .argument('<measured>', 'captured CSV: time column and value column(s), header and unit rows allowed')
     .argument('<envelope>', 'envelope.csv written by voltcast envelope')
-    .option('-p, --probe <name>', 'probe of the envelope (needed when it holds several)')
-    .option('--column <name>', 'column of the capture (default: named like the probe, or the only one)')
+    .option('--signal <name>', 'signal (recorded node) of the envelope, needed when it holds several')
+    .option('--column <name>', 'column of the capture (default: named like the signal, or the only one)')
     .option('--shift <auto|T>', 'delay of the capture: auto (cross-correlation) or a time such as 150u', '0')
     .option('--margin <V>', 'widen the limits by this much, for measurement noise')
     .option('--time-margin <T>', 'check each sample against the limits within ±T, for jitter')

@@ -3,7 +3,7 @@ import { join } from 'node:path';
 import { formatSI, type Circuit, type Findings, type TransientResult } from '@voltcast/core';
 import { findingsText } from './findings-text.ts';
 import { adcText } from './adc-text.ts';
-import type { ProbeExtremes } from './probe-extremes.ts';
+import type { NodeExtremes } from './node-extremes.ts';
 import { textTable } from './text-table.ts';
 
 /**
@@ -18,7 +18,7 @@ export interface RunReport extends Findings {
   readonly settings: Circuit['simulate'];
   /** Voltage of every named node at t = 0. */
   readonly operatingPoint: Record<string, number>;
-  readonly probes: Record<string, { min: number; max: number; final: number }>;
+  readonly recorded: Record<string, { min: number; max: number; final: number }>;
 }
 
 /**
@@ -29,7 +29,7 @@ export function buildReport(
   circuit: Circuit,
   file: string,
   result: TransientResult,
-  extremes: readonly ProbeExtremes[],
+  extremes: readonly NodeExtremes[],
   findings: Findings,
 ): RunReport {
   return {
@@ -37,7 +37,7 @@ export function buildReport(
     file,
     settings: circuit.simulate,
     operatingPoint: Object.fromEntries(result.operatingPoint),
-    probes: Object.fromEntries(extremes.map(({ probe, min, max, final }) => [probe, { min, max, final }])),
+    recorded: Object.fromEntries(extremes.map(({ node, min, max, final }) => [node, { min, max, final }])),
     ...findings,
   };
 }
@@ -67,9 +67,9 @@ export function reportText(report: RunReport): string {
       ['output step', formatSI(settings.outputStep, 's')],
       ['max step', formatSI(settings.maxStep, 's')],
       ...(settings.fixedStep !== undefined ? [['fixed step', formatSI(settings.fixedStep, 's')]] : []),
-      ['relative tolerance', String(settings.relativeTolerance)],
-      ['voltage tolerance', formatSI(settings.voltageTolerance, 'V')],
-      ['current tolerance', formatSI(settings.currentTolerance, 'A')],
+      ['accuracy, relative', String(settings.accuracy.relative)],
+      ['accuracy, volts', formatSI(settings.accuracy.volts, 'V')],
+      ['accuracy, amps', formatSI(settings.accuracy.amps, 'A')],
     ]),
     '',
     'work',
@@ -88,16 +88,16 @@ export function reportText(report: RunReport): string {
     'operating point (t = 0)',
     ...textTable(Object.entries(report.operatingPoint).map(([node, volts]) => [node, formatSI(volts, 'V')])),
     '',
-    'probes',
-    ...probeTable(report.probes, true),
+    'recorded nodes',
+    ...nodeTable(report.recorded, true),
   ];
   return lines.join('\n') + '\n';
 }
 
-/** Per-probe table with a header row; `withFinal` adds the final value column. */
-export function probeTable(probes: RunReport['probes'], withFinal: boolean): string[] {
+/** Per-node table with a header row; `withFinal` adds the final value column. */
+export function nodeTable(recorded: RunReport['recorded'], withFinal: boolean): string[] {
   const header = withFinal ? ['node', 'min', 'max', 'final'] : ['node', 'min', 'max'];
-  const rows = Object.entries(probes).map(([node, p]) => {
+  const rows = Object.entries(recorded).map(([node, p]) => {
     const row = [node, formatSI(p.min, 'V'), formatSI(p.max, 'V')];
     return withFinal ? [...row, formatSI(p.final, 'V')] : row;
   });

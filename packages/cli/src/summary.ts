@@ -1,6 +1,6 @@
 import { isAbsolute, relative, resolve } from 'node:path';
 import { formatSI, type Circuit } from '@voltcast/core';
-import { probeTable, type RunReport } from './report.ts';
+import { nodeTable, type RunReport } from './report.ts';
 import { textTable } from './text-table.ts';
 import { topFindings } from './findings-text.ts';
 
@@ -16,8 +16,8 @@ export function runSummary(report: RunReport, circuit: Circuit, wallSeconds: num
     ], 2),
     'files',
     ...files.map((file) => `  ${displayPath(file)}`),
-    'probes',
-    ...probeTable(report.probes, false),
+    'recorded nodes',
+    ...nodeTable(report.recorded, false),
     'findings',
     ...topFindings(report).map((line) => `  ${line}`),
   ];

@@ -1,7 +1,7 @@
 import { BufferedWriter } from './buffered-writer.ts';
 
 /**
- * `waveforms.csv`: header `time,<probe>,...`, then one row per output step, every value in SI
+ * `waveforms.csv`: header `time,<node>,...`, then one row per output step, every value in SI
  * base units (seconds, volts) as a plain number.
  *
  * Values are rounded to 9 significant digits, then printed in JavaScript's shortest form. Nine
@@ -13,16 +13,16 @@ import { BufferedWriter } from './buffered-writer.ts';
 export class WaveformCsv {
   readonly #out: BufferedWriter;
 
-  constructor(path: string, probes: readonly string[]) {
+  constructor(path: string, recorded: readonly string[]) {
     this.#out = new BufferedWriter(path);
-    this.#out.write(['time', ...probes].map(csvField).join(',') + '\n');
+    this.#out.write(['time', ...recorded].map(csvField).join(',') + '\n');
   }
 
   get path(): string {
     return this.#out.path;
   }
 
-  /** One output row; `values` are in probe order (the array may be reused by the caller). */
+  /** One output row; `values` are in record order (the array may be reused by the caller). */
   row(time: number, values: Float64Array): void {
     let line = formatValue(time);
     for (let i = 0; i < values.length; i++) line += ',' + formatValue(values[i]);

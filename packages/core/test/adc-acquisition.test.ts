@@ -101,10 +101,10 @@ describe('time-controlled switch in a circuit file', () => {
 circuit: switch-steps
 parts:
   SRC: { voltage: 1, between: [src, gnd] }
-  SW: { switch: { on: 1k, off: 1G }, between: [src, c], closed: [[2u, 3u]], repeat: 10u }
+  SW: { switch: { on: 1k, off: 1G }, between: [src, c], closed: [[2u, 3u]], every: 10u }
   C1: { capacitor: 1n, initial: 0, between: [c, gnd] }
 simulate: { duration: 30u, output-step: 1u }
-probes: [c]
+record: [c]
 `);
     const run = runCircuit(circuit);
     const c = run.transient.columns.get('c')!;

@@ -35,7 +35,7 @@ describe('switch schedule', () => {
   });
 
   it('reads from a circuit file and reports bad schedules where they are written', () => {
-    expect(messages('{ switch: 50, between: [a, b], closed: [[1m, 2m]], repeat: 5m }')).toEqual([]);
+    expect(messages('{ switch: 50, between: [a, b], closed: [[1m, 2m]], every: 5m }')).toEqual([]);
     expect(messages('{ switch: { on: 50, off: 10 }, between: [a, b], open: [[2m, 1m]] }')).toEqual([
       's.yaml:4:32: error: the off resistance (10 Ω) must be above the on resistance (50 Ω) (part SW) at parts.SW.switch.off\n  an open switch conducts less than a closed one',
       's.yaml:4:62: error: interval 1 ends (1 ms) before it starts (2 ms) (part SW) at parts.SW.open.0\n  write [from, to] with to after from',

@@ -16,7 +16,7 @@ parts:
 simulate:
   duration: 5m
   output-step: 5u
-probes: [in, out, amp]
+record: [in, out, amp]
 `;
 
 /** Every issue of a text has a position inside the text. */

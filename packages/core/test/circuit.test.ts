@@ -37,31 +37,27 @@ describe('a valid circuit', () => {
     expect(circuit?.name).toBe('invented-test-filter');
     expect(circuit?.parts.map((part) => `${part.name}:${part.kind}`)).toEqual(['SRC:voltage', 'R1:resistor', 'C1:capacitor']);
     expect(circuit?.nodes).toEqual(['in', 'out']);
-    expect(circuit?.probes).toEqual(['in', 'out']);
+    expect(circuit?.recorded).toEqual(['in', 'out']);
     expect(circuit?.simulate).toEqual({
       duration: 10e-3,
       outputStep: 10e-6,
       maxStep: 10e-6,
       fixedStep: undefined,
-      relativeTolerance: 1e-4,
-      voltageTolerance: 1e-6,
-      currentTolerance: 1e-9,
+      accuracy: { relative: 1e-4, volts: 1e-6, amps: 1e-9 },
     });
   });
 
-  it('takes every simulate key and explicit probes', () => {
-    const text = `${filter}  output-step: 20u\n  max-step: 1u\n  fixed-step: 100n\n  relative-tolerance: 0.1%\n  voltage-tolerance: 1u\n  current-tolerance: 1p\nprobes: [out]\n`;
+  it('takes every simulate key and explicit record', () => {
+    const text = `${filter}  output-step: 20u\n  max-step: 1u\n  fixed-step: 100n\n  accuracy: { relative: 0.1%, amps: 1p }\nrecord: [out]\n`;
     const circuit = parseCircuit(text);
     expect(circuit.simulate).toEqual({
       duration: 10e-3,
       outputStep: 20e-6,
       maxStep: 1e-6,
       fixedStep: 100e-9,
-      relativeTolerance: 1e-3,
-      voltageTolerance: 1e-6,
-      currentTolerance: 1e-12,
+      accuracy: { relative: 1e-3, volts: 1e-6, amps: 1e-12 },
     });
-    expect(circuit.probes).toEqual(['out']);
+    expect(circuit.recorded).toEqual(['out']);
   });
 
   it('passes readFile on to file waves', () => {
@@ -79,14 +75,14 @@ describe('errors say what, where and what to do', () => {
   });
 
   it('an unknown top-level key suggests the near one', () => {
-    const issue = only(`${filter}prob: [out]\n`);
-    expect(formatIssue(issue, 'f.yaml')).toBe("f.yaml:8:1: error: unknown key 'prob' at prob\n  did you mean 'probes'?");
+    const issue = only(`${filter}recrod: [out]\n`);
+    expect(formatIssue(issue, 'f.yaml')).toBe("f.yaml:8:1: error: unknown key 'recrod' at recrod\n  did you mean 'record'?");
   });
 
   it('an unknown key with nothing near lists the known keys', () => {
     const issue = only(`${filter}zzz: {}\n`);
     expect(issue.message).toBe("unknown key 'zzz'");
-    expect(issue.hint).toBe('keys known here: circuit, parts, simulate, probes, adc');
+    expect(issue.hint).toBe('keys known here: circuit, parts, simulate, record, adc');
   });
 
   it('a duplicate part name points at the second one and names the first', () => {
@@ -145,21 +141,21 @@ describe('errors say what, where and what to do', () => {
     expect(formatIssue(issue, 'f.yaml')).toBe("f.yaml:5:37: error: node 'ouut' is only connected to C1 (part C1) at parts.C1.between.0\n  did you mean 'out'?");
   });
 
-  it('a lone node with no near name is a warning, and silent when probed', () => {
+  it('a lone node with no near name is a warning, and silent when recorded', () => {
     const text = `${filter.replace('simulate:', '  R2: { resistor: 1k, between: [out, sense] }\nsimulate:')}`;
     const { circuit, issues } = readCircuit(text);
     expect(circuit).toBeDefined();
     expect(issues).toMatchObject([{ severity: 'warning', message: "node 'sense' is only connected to R2", part: 'R2', position: { line: 6, column: 38 } }]);
-    expect(readCircuit(`${text}probes: [out, sense]\n`).issues).toEqual([]);
+    expect(readCircuit(`${text}record: [out, sense]\n`).issues).toEqual([]);
   });
 
-  it('probes that name no node suggest one; gnd and repeats are caught', () => {
-    const issue = only(`${filter}probes: [in, ot]\n`);
-    expect(issue).toMatchObject({ message: "probe 'ot' names no node of this circuit", hint: "did you mean 'out'?", path: ['probes', 1], position: { line: 8, column: 14 } });
-    expect(only(`${filter}probes: [gnd]\n`).message).toMatch(/gnd is ground/);
-    const repeated = readCircuit(`${filter}probes: [out, out]\n`);
-    expect(repeated.circuit?.probes).toEqual(['out']);
-    expect(repeated.issues).toMatchObject([{ severity: 'warning', message: "probe 'out' is listed twice" }]);
+  it('record entries that name no node suggest one; gnd and repeats are caught', () => {
+    const issue = only(`${filter}record: [in, ot]\n`);
+    expect(issue).toMatchObject({ message: "record: 'ot' names no node of this circuit", hint: "did you mean 'out'?", path: ['record', 1], position: { line: 8, column: 14 } });
+    expect(only(`${filter}record: [gnd]\n`).message).toMatch(/gnd is ground/);
+    const repeated = readCircuit(`${filter}record: [out, out]\n`);
+    expect(repeated.circuit?.recorded).toEqual(['out']);
+    expect(repeated.issues).toMatchObject([{ severity: 'warning', message: "record: 'out' is listed twice" }]);
   });
 
   it('a circuit with no part on gnd is an error, with a hint for a capitalised ground', () => {
@@ -220,10 +216,10 @@ describe('parseCircuit and buildCircuit', () => {
         RB: { resistor: 4700, between: ['mid', 'gnd'] },
       },
       simulate: { duration: '1m' },
-      probes: ['mid'],
+      record: ['mid'],
     });
     expect(circuit.nodes).toEqual(['top', 'mid']);
-    expect(circuit.probes).toEqual(['mid']);
+    expect(circuit.recorded).toEqual(['mid']);
     expect(circuit.simulate.outputStep).toBe(1e-6);
   });
 
@@ -246,7 +242,7 @@ describe('did you mean', () => {
     ['gnd', 'gdn', 1],
     ['kitten', 'sitting', 3],
     ['', 'abc', 3],
-    ['probes', 'prob', 2],
+    ['record', 'recrod', 1],
   ])('distance(%s, %s) = %d', (a, b, d) => {
     expect(editDistance(a, b)).toBe(d);
     expect(editDistance(b, a)).toBe(d);

@@ -14,7 +14,7 @@ const circuit = buildCircuit({
     C1: { capacitor: '100n', tolerance: '5%', between: ['out', 'gnd'] },
   },
   simulate: { duration: '4m', 'output-step': '10u' },
-  probes: ['out'],
+  record: ['out'],
 });
 const result = envelope(circuit, { corners: true });
 const limits = { time: result.time, min: result.min.get('out')!, nominal: result.nominal.get('out')!, max: result.max.get('out')! };

@@ -12,7 +12,7 @@ function divider(extra: object = {}) {
       RBOT: { resistor: '4.7k', tolerance: '1%', between: ['out', 'gnd'] },
     },
     simulate: { duration: '1m', 'output-step': '0.1m' },
-    probes: ['out'],
+    record: ['out'],
   });
 }
 

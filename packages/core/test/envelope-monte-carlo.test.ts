@@ -13,7 +13,7 @@ const rc = buildCircuit({
     C1: { capacitor: '1u', tolerance: '10%', distribution: 'normal', initial: 0, between: ['out', 'gnd'] },
   },
   simulate: { duration: '2m', 'output-step': '0.1m' },
-  probes: ['out'],
+  record: ['out'],
 });
 
 describe('Monte Carlo with normal tolerances', () => {

@@ -11,7 +11,7 @@ const follower = buildCircuit({
     RL: { resistor: '10k', between: ['out', 'gnd'] },
   },
   simulate: { duration: '1m', 'output-step': '0.1m' },
-  probes: ['out'],
+  record: ['out'],
 });
 
 describe('op-amp tolerances', () => {

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { findRinging, parseCircuit, runCircuit, type Findings } from '../src/index.ts';
+import { parseCircuit, runCircuit, type Findings } from '../src/index.ts';
+import { findRinging } from '../src/analysis/ringing/find-ringing.ts';
 import { uniformNoise } from './support/lcg.ts';
 
 const findingsOf = (yaml: string): Findings => runCircuit(parseCircuit(yaml, { fileName: 'inline.yaml' })).findings;
@@ -14,7 +15,7 @@ parts:
   R1: { resistor: 1k, between: [in, out] }
   C1: { capacitor: 100n, between: [out, gnd] }
 simulate: { duration: 5m, output-step: 1u }
-probes: [in, out]
+record: [in, out]
 `);
     // 10 edges examined (square wave: 2 edges per period, 5 periods), nothing found.
     expect(findings.stats.events).toBeGreaterThanOrEqual(9);
@@ -29,7 +30,7 @@ parts:
   R1: { resistor: 10k, between: [in, out] }
   C1: { capacitor: 1n, between: [out, gnd] }
 simulate: { duration: 10m, output-step: 2u }
-probes: [in, out]
+record: [in, out]
 `);
     expect(findings.ringing).toEqual([]);
   });
@@ -43,7 +44,7 @@ parts:
   RF: { resistor: 190k, between: [sum, out] }
   AMP: { opamp: { preset: general-purpose, headroom: 2 }, plus: in, minus: sum, out: out, supply: [-10, 10] }
 simulate: { duration: 4m, output-step: 1u }
-probes: [in, out]
+record: [in, out]
 `);
     // The premise: it does clip at both rails and slew between them (0.5 V/µs across 16 V).
     expect(findings.saturation.filter((s) => s.rail === 'high').length).toBeGreaterThanOrEqual(3);
@@ -62,7 +63,7 @@ parts:
   R1: { resistor: 1k, between: [in, out] }
   C1: { capacitor: 4.7n, between: [out, gnd] }
 simulate: { duration: 4m, output-step: 1u }
-probes: [in, out]
+record: [in, out]
 `);
     expect(findings.ringing).toEqual([]);
   });

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { findRinging, TwoStepGuard } from '../src/index.ts';
+import { findRinging } from '../src/analysis/ringing/find-ringing.ts';
+import { TwoStepGuard } from '../src/analysis/ringing/two-step-guard.ts';
 
 const dt = 1e-6;
 const time = Float64Array.from({ length: 2000 }, (_, i) => i * dt);

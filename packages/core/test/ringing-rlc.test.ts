@@ -1,7 +1,8 @@
 import { readFileSync } from 'node:fs';
 import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { measureOscillation, parseCircuit, runCircuit } from '../src/index.ts';
+import { parseCircuit, runCircuit } from '../src/index.ts';
+import { oscillationFigures } from '../src/analysis/ringing/oscillation.ts';
 
 const fixtures = join(import.meta.dirname, '..', '..', '..', 'fixtures');
 
@@ -56,7 +57,7 @@ describe('ringing of a series RLC (fixtures/supply-ringing.yaml)', () => {
   });
 });
 
-describe('measureOscillation on an exact damped sinusoid', () => {
+describe('oscillationFigures on an exact damped sinusoid', () => {
   it('recovers ζ = 0.2 and the damped frequency of 1 - e^(-ζω0t)(cos ωd t + ζ/√(1-ζ²) sin ωd t)', () => {
     // Unit step response of a second-order system (control textbooks), sampled 200 times per period.
     const zeta = 0.2;
@@ -65,7 +66,7 @@ describe('measureOscillation on an exact damped sinusoid', () => {
     const dt = (2 * Math.PI) / wd / 200;
     const time = Float64Array.from({ length: 4000 }, (_, i) => i * dt);
     const values = time.map((t) => 1 - Math.exp(-zeta * w0 * t) * (Math.cos(wd * t) + (zeta / Math.sqrt(1 - zeta * zeta)) * Math.sin(wd * t)));
-    const found = measureOscillation(time, values, 0, time.length, 0, 0, 0.01)!;
+    const found = oscillationFigures(time, values, 0, time.length, 0, 0, 0.01)!;
     expect(Math.abs(found.dampingRatio - zeta) / zeta).toBeLessThan(0.01);
     expect(Math.abs(found.frequency - wd / (2 * Math.PI)) / (wd / (2 * Math.PI))).toBeLessThan(0.002);
     expect(found.overshoot).toBeCloseTo(Math.exp((-Math.PI * zeta) / Math.sqrt(1 - zeta * zeta)), 3);

@@ -10,10 +10,10 @@ describe('slew-rate limiting', () => {
 circuit: follower-step
 parts:
   SRC: { voltage: { points: [[0, -5], [10u, -5], [10.01u, 5], [100u, 5], [100.01u, -5]] }, between: [in, gnd] }
-  AMP: { opamp: general-purpose, plus: in, minus: out, out: out, supply: [-12, 12] }
+  AMP: { opamp: { preset: general-purpose, slew: 0.5V/us }, plus: in, minus: out, out: out, supply: [-12, 12] }
   RL: { resistor: 10k, between: [out, gnd] }
 simulate: { duration: 200u, output-step: 100n }
-probes: [in, out]
+record: [in, out]
 `);
 
   it('finds one rising and one falling interval at the slew rate', () => {
@@ -32,16 +32,15 @@ probes: [in, out]
 });
 
 describe('output current limiting', () => {
-  // A follower asked for 5 V into 100 Ω needs 50 mA; the general-purpose class limits at 25 mA
-  // (opamp-presets.ts), so the output sits near 25 mA · 100 Ω = 2.5 V (Ohm's law).
+  // A follower asked for 5 V into 100 Ω needs 50 mA; the amplifier here limits at 25 mA, so the output sits near 25 mA · 100 Ω = 2.5 V (Ohm's law).
   const findings = findingsOf(`
 circuit: follower-heavy-load
 parts:
   SRC: { voltage: { points: [[0, 0], [100u, 0], [101u, 5], [300u, 5], [301u, 0]] }, between: [in, gnd] }
-  AMP: { opamp: general-purpose, plus: in, minus: out, out: out, supply: [-12, 12] }
+  AMP: { opamp: { preset: general-purpose, slew: 0.5V/us, rout: 75, current-limit: 25mA }, plus: in, minus: out, out: out, supply: [-12, 12] }
   RL: { resistor: 100, between: [out, gnd] }
 simulate: { duration: 400u, output-step: 1u }
-probes: [in, out]
+record: [in, out]
 `);
 
   it('finds one interval while the load asks for more than the limit', () => {

@@ -65,7 +65,7 @@ describe('points', () => {
   });
 
   it('repeats with a period, jumping back to the first value', () => {
-    const saw = good('{ points: [[0, 0], [1m, 1]], repeat: 2m }');
+    const saw = good('{ points: [[0, 0], [1m, 1]], every: 2m }');
     expect(saw.value(0.5e-3)).toBeCloseTo(0.5, 12);
     expect(saw.value(1.5e-3)).toBe(1);
     expect(saw.value(2e-3)).toBe(0);
@@ -74,7 +74,7 @@ describe('points', () => {
   });
 
   it('does not drift over many periods: corner k·period is computed, not accumulated', () => {
-    const saw = good('{ points: [[0, 0], [1m, 1]], repeat: 2m }');
+    const saw = good('{ points: [[0, 0], [1m, 1]], every: 2m }');
     const visited = corners(saw, 20000);
     expect(visited).toHaveLength(20000);
     for (let i = 1; i < visited.length; i++) expect(visited[i]).toBeGreaterThan(visited[i - 1]);
@@ -85,7 +85,7 @@ describe('points', () => {
   });
 
   it('a late first point holds the first value in every period', () => {
-    const pulse = good('{ points: [[1m, 0], [1.1m, 5], [2m, 5], [2.1m, 0]], repeat: 5m }');
+    const pulse = good('{ points: [[1m, 0], [1.1m, 5], [2m, 5], [2.1m, 0]], every: 5m }');
     expect(pulse.value(5.5e-3)).toBe(0);
     expect(pulse.value(6.5e-3)).toBe(5);
     expect(corners(pulse, 6)).toEqual([1e-3, 1.1e-3, 2e-3, 2.1e-3, 5e-3, 5e-3 + 1e-3]);
@@ -99,10 +99,10 @@ describe('points', () => {
     expect(messages[0]).toMatch(/a short time apart/);
   });
 
-  it('rejects equal times, a negative start, a short repeat, and malformed points', () => {
+  it('rejects equal times, a negative start, a short period, and malformed points', () => {
     expect(read('{ points: [[0, 0], [0, 1]] }').messages[0]).toMatch(/point 2 \(0 s\) is not after/);
     expect(read('{ points: [[-1m, 0], [1m, 1]] }').messages[0]).toMatch(/point 1 has a negative time/);
-    expect(read('{ points: [[0, 0], [3m, 1]], repeat: 2m }').messages[0]).toMatch(/repeat period 2 ms is shorter than the last point's time 3 ms/);
+    expect(read('{ points: [[0, 0], [3m, 1]], every: 2m }').messages[0]).toMatch(/every: 2 ms is shorter than the last point's time 3 ms/);
     expect(read('{ points: [[0, 0], [1m]] }').messages[0]).toMatch(/point 2 needs two numbers, \[time, value\], found 1/);
     expect(read('{ points: [] }').messages[0]).toMatch(/at least one point/);
     expect(read('{ points: [[0, 0], [1m, 5A]] }').messages[0]).toMatch(/'5A' is not a voltage: A is a unit of current/);
@@ -210,7 +210,7 @@ describe('file', () => {
     expect(wave.value(0.5e-3)).toBeCloseTo(1.25, 12);
     expect(wave.value(3e-3)).toBe(5);
     expect(corners(wave, 5)).toEqual([1e-3, 2e-3]);
-    const repeated = good('{ file: ramp.csv, repeat: 4m }', context);
+    const repeated = good('{ file: ramp.csv, every: 4m }', context);
     expect(repeated.value(4.5e-3)).toBeCloseTo(1.25, 12);
   });
 

@@ -7,6 +7,6 @@ export function checkCommand(file: string): void {
   const count = (n: number, word: string): string => `${n} ${word}${n === 1 ? '' : 's'}`;
   console.log(
     `${fileName}: ok (${circuit.name}: ${count(circuit.parts.length, 'part')}, ` +
-      `${count(circuit.nodes.length, 'node')}, ${count(circuit.probes.length, 'probe')})`,
+      `${count(circuit.nodes.length, 'node')}, ${count(circuit.recorded.length, 'recorded node')})`,
   );
 }

@@ -40,7 +40,7 @@ export async function envelopeCommand(file: string, options: EnvelopeCommandOpti
   const progress = new EnvelopeProgress(plan.variants, !options.quiet);
   let result: Envelope;
   try {
-    const bounds = await runOnWorkers(plan, file, Math.min(workers, Math.max(1, plan.variants)), nominal, (done) => progress.update(done));
+    const bounds = await runOnWorkers(plan, file, Math.min(workers, Math.max(1, plan.variants)), (done) => progress.update(done));
     result = assembleEnvelope(plan, nominal, bounds);
   } finally {
     progress.stop();
@@ -63,7 +63,7 @@ export async function envelopeCommand(file: string, options: EnvelopeCommandOpti
 }
 
 function summary(result: Envelope, fileName: string, workers: number, wallSeconds: number, files: readonly string[]): string {
-  const widest = result.probes.map((p) => {
+  const widest = result.recorded.map((p) => {
     const min = result.min.get(p)!;
     const max = result.max.get(p)!;
     let spread = 0;

@@ -4,7 +4,7 @@ import { runCircuit, type CircuitRun } from '@voltcast/core';
 import { readCircuitFile } from '../read-circuit-file.ts';
 import { writeOutputDir } from '../output-dir.ts';
 import { WaveformCsv } from '../waveform-csv.ts';
-import { ExtremesTracker } from '../probe-extremes.ts';
+import { ExtremesTracker } from '../node-extremes.ts';
 import { buildReport, writeReport } from '../report.ts';
 import { RunProgress } from '../progress.ts';
 import { runSummary } from '../summary.ts';
@@ -33,8 +33,8 @@ export function runCommand(file: string, options: RunOptions): void {
   const startedAt = performance.now();
 
   const { report, files } = writeOutputDir(outDir, (staging) => {
-    const csv = new WaveformCsv(join(staging, 'waveforms.csv'), circuit.probes);
-    const extremes = new ExtremesTracker(circuit.probes);
+    const csv = new WaveformCsv(join(staging, 'waveforms.csv'), circuit.recorded);
+    const extremes = new ExtremesTracker(circuit.recorded);
     let run: CircuitRun;
     try {
       run = runCircuit(circuit, {

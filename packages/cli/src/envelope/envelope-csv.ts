@@ -2,10 +2,10 @@ import { writeFileSync } from 'node:fs';
 import type { AdcEnvelope, Envelope } from '@voltcast/core';
 import { formatValue } from '../waveform-csv.ts';
 
-/** `envelope.csv`: `time,<probe>.min,<probe>.nominal,<probe>.max,...`, one row per output step. */
+/** `envelope.csv`: `time,<node>.min,<node>.nominal,<node>.max,...`, one row per output step. */
 export function writeEnvelopeCsv(path: string, result: Envelope): void {
-  const header = ['time', ...result.probes.flatMap((p) => [`${p}.min`, `${p}.nominal`, `${p}.max`])];
-  const columns = result.probes.flatMap((p) => [result.min.get(p)!, result.nominal.get(p)!, result.max.get(p)!]);
+  const header = ['time', ...result.recorded.flatMap((p) => [`${p}.min`, `${p}.nominal`, `${p}.max`])];
+  const columns = result.recorded.flatMap((p) => [result.min.get(p)!, result.nominal.get(p)!, result.max.get(p)!]);
   const lines = [header.join(',')];
   for (let r = 0; r < result.time.length; r++) {
     let line = formatValue(result.time[r]);

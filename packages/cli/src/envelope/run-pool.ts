@@ -1,19 +1,19 @@
 import { createRequire } from 'node:module';
 import { pathToFileURL } from 'node:url';
 import { Piscina } from 'piscina';
-import { foldFor, SimulationError, type CircuitRun, type EnvelopeBounds, type EnvelopePlan } from '@voltcast/core';
+import { mergeBounds, SimulationError, type EnvelopeBounds, type EnvelopePlan } from '@voltcast/core';
 import type { EnvelopeTask, TaskResult } from './task.ts';
 
 /** Slices per worker: enough for an even finish and a lively progress bar. */
 const slicesPerWorker = 8;
 
 /**
- * Run every variant of `plan` on `workers` threads and fold them (shaped like the `nominal` run). Workers are TypeScript run
+ * Run every variant of `plan` on `workers` threads and fold them. Workers are TypeScript run
  * through tsx's loader, found by absolute path so that any working folder will do. Slices
  * fold in whatever order they finish: min and max do not care, so the bounds are the same
  * bit for bit for any number of workers.
  */
-export async function runOnWorkers(plan: EnvelopePlan, file: string, workers: number, nominal: CircuitRun, onDone: (variants: number) => void): Promise<EnvelopeBounds> {
+export async function runOnWorkers(plan: EnvelopePlan, file: string, workers: number, onDone: (variants: number) => void): Promise<EnvelopeBounds> {
   const tsx = pathToFileURL(createRequire(import.meta.url).resolve('tsx')).href;
   const pool = new Piscina<EnvelopeTask, TaskResult>({
     filename: new URL('./worker.ts', import.meta.url).href,
@@ -22,7 +22,7 @@ export async function runOnWorkers(plan: EnvelopePlan, file: string, workers: nu
     maxThreads: workers,
     idleTimeout: 1000,
   });
-  const fold = foldFor(plan, nominal);
+  const parts: EnvelopeBounds[] = [];
   const size = Math.max(1, Math.ceil(plan.variants / (workers * slicesPerWorker)));
   let done = 0;
   try {
@@ -36,7 +36,7 @@ export async function runOnWorkers(plan: EnvelopePlan, file: string, workers: nu
             const f = result.failure;
             throw new SimulationError(f.message, f.time, f.nodes, f.hint, f.parts);
           }
-          if (result.bounds.runs > 0) fold.merge(result.bounds);
+          parts.push(result.bounds);
           done += end - from;
           onDone(done);
         }),
@@ -46,5 +46,5 @@ export async function runOnWorkers(plan: EnvelopePlan, file: string, workers: nu
   } finally {
     await pool.destroy();
   }
-  return fold.bounds();
+  return mergeBounds(parts);
 }

@@ -2,14 +2,14 @@ import type { Envelope } from '@voltcast/core';
 import { colour } from './palette.ts';
 import type { Figure, Panel } from './series.ts';
 
-/** `voltcast envelope --plot`: per probe its band (min to max) with the nominal in it; per ADC its codes, held between conversions. */
+/** `voltcast envelope --plot`: per recorded node its band (min to max) with the nominal in it; per ADC its codes, held between conversions. */
 export function envelopeFigure(result: Envelope, circuitName: string, fileName: string): Figure {
-  const panels: Panel[] = result.probes.map((probe, i) => ({
-    title: probe,
+  const panels: Panel[] = result.recorded.map((node, i) => ({
+    title: node,
     unit: 'V',
     series: [
-      { kind: 'band', name: `${probe} min..max`, time: result.time, low: result.min.get(probe)!, high: result.max.get(probe)! },
-      { kind: 'line', name: `${probe} nominal`, time: result.time, values: result.nominal.get(probe)! },
+      { kind: 'band', name: `${node} min..max`, time: result.time, low: result.min.get(node)!, high: result.max.get(node)! },
+      { kind: 'line', name: `${node} nominal`, time: result.time, values: result.nominal.get(node)! },
     ],
     colours: [colour(i), colour(i)],
   }));

@@ -11,12 +11,18 @@ export interface SimulateSettings {
   readonly maxStep: number;
   /** When set, every step has this size (no error control): for convergence studies. */
   readonly fixedStep?: number;
-  /** Relative tolerance of the local truncation error per step. */
-  readonly relativeTolerance: number;
-  /** Absolute tolerance for node voltages, volts. */
-  readonly voltageTolerance: number;
-  /** Absolute tolerance for branch currents, amperes. */
-  readonly currentTolerance: number;
+  /** How closely each step follows the exact solution. */
+  readonly accuracy: Accuracy;
+}
+
+/** `simulate: accuracy:`: the tolerances of the local truncation error per step. */
+export interface Accuracy {
+  /** Relative tolerance. */
+  readonly relative: number;
+  /** Absolute floor for node voltages, volts. */
+  readonly volts: number;
+  /** Absolute floor for branch currents, amperes. */
+  readonly amps: number;
 }
 
 /** A validated circuit: what the parser returns and what `simulate` takes. */
@@ -25,7 +31,7 @@ export interface Circuit {
   readonly parts: readonly PartSpecBase[];
   readonly simulate: SimulateSettings;
   /** Node names recorded as output columns, in order. */
-  readonly probes: readonly string[];
+  readonly recorded: readonly string[];
   /** Every node name except `gnd`, in order of first appearance. */
   readonly nodes: readonly string[];
   /** Converters of the `adc:` section; their sampling parts are among `parts`. */
@@ -36,7 +42,5 @@ export interface Circuit {
 export const simulateDefaults = {
   /** Output rows when `output-step` is absent: duration / 1000. */
   rowsWhenUnset: 1000,
-  relativeTolerance: 1e-4,
-  voltageTolerance: 1e-6,
-  currentTolerance: 1e-9,
+  accuracy: { relative: 1e-4, volts: 1e-6, amps: 1e-9 },
 } as const;

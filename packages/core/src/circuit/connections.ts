@@ -15,10 +15,10 @@ export function nodesInOrder(parts: readonly PartSpecBase[]): string[] {
 
 /**
  * Checks across parts: the circuit reaches ground, and no node hangs from a single pin
- * unless it is probed on purpose. A lone node whose name is close to another node's is
+ * unless it is recorded on purpose. A lone node whose name is close to another node's is
  * almost always a misspelling, so that is an error; other lone nodes get a warning.
  */
-export function checkConnections(parts: readonly PartSpecBase[], probed: readonly string[], partsValue: ValueReader | undefined, sink: IssueSink): void {
+export function checkConnections(parts: readonly PartSpecBase[], recorded: readonly string[], partsValue: ValueReader | undefined, sink: IssueSink): void {
   const pinsByNode = new Map<string, { part: string; pin: PinRef }[]>();
   for (const part of parts) {
     for (const pin of part.pins) {
@@ -41,7 +41,7 @@ export function checkConnections(parts: readonly PartSpecBase[], probed: readonl
     });
   }
   const names = [...pinsByNode.keys()];
-  const isLone = (node: string) => pinsByNode.get(node)!.length === 1 && node !== ground && !probed.includes(node);
+  const isLone = (node: string) => pinsByNode.get(node)!.length === 1 && node !== ground && !recorded.includes(node);
   for (const [node, pins] of pinsByNode) {
     if (!isLone(node)) continue;
     const { part, pin } = pins[0];
@@ -53,7 +53,7 @@ export function checkConnections(parts: readonly PartSpecBase[], probed: readonl
       message: `node '${node}' is only connected to ${part}`,
       hint: near !== undefined
         ? `did you mean '${near}'?`
-        : 'nothing else connects to it: check the spelling, or list it under probes if it is a test point',
+        : 'nothing else connects to it: check the spelling, or list it under recorded if it is a test point',
       path: pin.path,
       part,
       position: pin.position,

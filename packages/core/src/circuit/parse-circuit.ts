@@ -1,5 +1,5 @@
 import { Document, LineCounter, parseDocument, type YAMLError } from 'yaml';
-import type { Circuit, SimulateSettings } from './circuit.ts';
+import type { Accuracy, Circuit, SimulateSettings } from './circuit.ts';
 import { simulateDefaults } from './circuit.ts';
 import { CircuitError, type CircuitIssue } from '../reading/issue.ts';
 import type { MapReader, ReadContext, ValueReader } from '../reading/reader.ts';
@@ -88,7 +88,7 @@ function readDocument(document: Document, sink: IssueSink, context: ReadContext,
   const name = readName(top);
   const parts = readParts(top.need('parts', 'list the parts under parts:, e.g. R1: { resistor: 10k, between: [in, out] }'), context);
   const simulate = readSimulate(top.need('simulate', 'write simulate: { duration: 10m }'));
-  const probesValue = top.get('probes');
+  const recordValue = top.get('record');
   const adcValue = top.get('adc');
   top.finish();
 
@@ -96,14 +96,14 @@ function readDocument(document: Document, sink: IssueSink, context: ReadContext,
   const adc = readAdcSection(adcValue, nodesInOrder(parts.specs), simulate.duration);
   const specs = [...parts.specs, ...adc.parts];
   const nodes = nodesInOrder(specs);
-  const probes = probesValue === undefined ? nodes : readProbes(probesValue, nodes);
+  const recorded = recordValue === undefined ? nodes : readRecord(recordValue, nodes);
   // With a part unread its pins are unknown, and the connection checks would only mislead.
-  // A node an ADC reads is used on purpose, as a probed one is.
-  const watched = [...(probesValue === undefined ? [] : probes), ...adc.adcs.flatMap((a) => a.input)];
+  // A node an ADC reads is used on purpose, as a recorded one is.
+  const watched = [...(recordValue === undefined ? [] : recorded), ...adc.adcs.flatMap((a) => a.input)];
   if (parts.complete) checkConnections(parts.specs, watched, top.get('parts'), sink);
 
   if (sink.issues.some((issue) => issue.severity === 'error')) return { issues: sink.issues };
-  return { circuit: { name, parts: specs, simulate, probes, nodes, adcs: adc.adcs }, issues: sink.issues };
+  return { circuit: { name, parts: specs, simulate, recorded, nodes, adcs: adc.adcs }, issues: sink.issues };
 }
 
 function readName(top: MapReader): string {
@@ -158,24 +158,37 @@ function readSimulate(value: ValueReader | undefined): SimulateSettings {
     outputStep,
     maxStep: keys?.numberOr('max-step', time, outputStep, positive) ?? NaN,
     fixedStep,
-    relativeTolerance: keys?.numberOr('relative-tolerance', quantities.fraction, simulateDefaults.relativeTolerance, { above: 0, max: 1 }) ?? NaN,
-    voltageTolerance: keys?.numberOr('voltage-tolerance', quantities.voltage, simulateDefaults.voltageTolerance, positive) ?? NaN,
-    currentTolerance: keys?.numberOr('current-tolerance', quantities.current, simulateDefaults.currentTolerance, positive) ?? NaN,
+    accuracy: readAccuracy(keys?.get('accuracy')),
   };
   keys?.finish();
   return settings;
 }
 
-function readProbes(value: ValueReader, nodes: readonly string[]): string[] {
+/** `accuracy: { relative, volts, amps }`: each key optional, defaults in `simulateDefaults`. */
+function readAccuracy(value: ValueReader | undefined): Accuracy {
+  const defaults = simulateDefaults.accuracy;
+  if (value === undefined) return defaults;
+  const keys = value.map();
+  const positive = { above: 0 };
+  const accuracy: Accuracy = {
+    relative: keys.numberOr('relative', quantities.fraction, defaults.relative, { above: 0, max: 1 }),
+    volts: keys.numberOr('volts', quantities.voltage, defaults.volts, positive),
+    amps: keys.numberOr('amps', quantities.current, defaults.amps, positive),
+  };
+  keys.finish();
+  return accuracy;
+}
+
+function readRecord(value: ValueReader, nodes: readonly string[]): string[] {
   const known = new Set(nodes);
-  const probes: string[] = [];
+  const recorded: string[] = [];
   for (const item of value.list()) {
     const name = item.node();
     if (name === '') continue;
-    if (name === 'gnd') item.fail('gnd is ground, always 0 V: it has no column', 'remove gnd from probes');
-    else if (!known.has(name)) item.fail(`probe '${name}' names no node of this circuit`, suggestion(name, nodes, 'nodes'));
-    else if (probes.includes(name)) item.warn(`probe '${name}' is listed twice`, 'remove the repeat');
-    else probes.push(name);
+    if (name === 'gnd') item.fail('gnd is ground, always 0 V: it has no column', 'remove gnd from record:');
+    else if (!known.has(name)) item.fail(`record: '${name}' names no node of this circuit`, suggestion(name, nodes, 'nodes'));
+    else if (recorded.includes(name)) item.warn(`record: '${name}' is listed twice`, 'remove the repeat');
+    else recorded.push(name);
   }
-  return probes;
+  return recorded;
 }

@@ -38,11 +38,11 @@ export interface SwitchSpec extends PartSpecBase {
 /**
  * `switch: 50` (on resistance) or `switch: { on: 50, off: 1G }`, `between: [a, b]`, and
  * when it conducts: `closed: [[on, off], ...]` or `open: [[from, to], ...]`, optional
- * `repeat: period`. Every edge is a corner the stepper lands on and damps after.
+ * `every: period`. Every edge is a corner the stepper lands on and damps after.
  */
 export const timedSwitch: PartKind<SwitchSpec> = {
   key: 'switch',
-  summary: 'time-controlled switch: `switch: 50` or `{ on: 50, off: 1G }`, `between: [a, b]`, `closed:` or `open:` [[from, to], ...], optional `repeat: period`',
+  summary: 'time-controlled switch: `switch: 50` or `{ on: 50, off: 1G }`, `between: [a, b]`, `closed:` or `open:` [[from, to], ...], optional `every: period`',
   read: (name, main, options) => {
     const { onResistance, offResistance } = readResistances(main);
     return { kind: 'switch', name, onResistance, offResistance, schedule: readSchedule(options), pins: readBetween(options) };
@@ -64,8 +64,8 @@ function readResistances(main: ValueReader): { onResistance: number; offResistan
 function readSchedule(options: MapReader): SwitchSchedule {
   const closed = options.get('closed');
   const open = options.get('open');
-  const repeat = options.get('repeat');
-  const period = repeat?.number(quantities.time, { above: 0 }) ?? Infinity;
+  const every = options.get('every');
+  const period = every?.number(quantities.time, { above: 0 }) ?? Infinity;
   const list = closed ?? open;
   if (closed !== undefined && open !== undefined) open.fail('a switch takes `closed:` or `open:`, not both', 'keep one: the switch is in the other state outside the listed intervals');
   if (list === undefined) {
@@ -85,7 +85,7 @@ function readSchedule(options: MapReader): SwitchSchedule {
     const previous = edges.length > 0 ? edges[edges.length - 1] : -Infinity;
     if (!(to > from)) item.fail(`interval ${i + 1} ends (${formatSI(to, 's')}) before it starts (${formatSI(from, 's')})`, 'write [from, to] with to after from');
     else if (!(from > previous)) item.fail(`interval ${i + 1} starts before the previous one ends (${formatSI(previous, 's')})`, 'list the intervals in time order, apart from each other');
-    else if (!(to < period)) item.fail(`interval ${i + 1} ends at or after the repeat period ${formatSI(period, 's')}`, 'every interval must end inside one period');
+    else if (!(to < period)) item.fail(`interval ${i + 1} ends at or after the period every: ${formatSI(period, 's')}`, 'every interval must end inside one period');
     else edges.push(from, to);
   }
   return { edges, origin: 0, period, inverted: open !== undefined && closed === undefined };

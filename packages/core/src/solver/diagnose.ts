@@ -11,15 +11,15 @@ export interface SingularCause {
 
 /**
  * Explain a singular matrix by its usual causes, checked on the circuit's graph: a loop of
- * voltage-defined branches (sources, inductors at DC, held capacitors), then nodes with no DC
- * path to ground. `unknown` is the column the factorization stopped at, the fallback culprit.
+ * voltage-defined branches (sources, inductors at DC, held capacitors), then nodes that float
+ * (nothing that conducts at DC joins them to ground). `unknown` is the column the factorization stopped at, the fallback culprit.
  */
 export function diagnoseSingular(devices: readonly Device[], topology: Topology, unknown: number): SingularCause {
   return findVoltageLoop(devices, topology) ?? findFloatingNodes(devices, topology) ?? {
     message: `the circuit equations have no unique solution at ${topology.labels[unknown] ?? 'an unknown'}`,
     nodes: unknown >= 0 && unknown < topology.size ? [topology.labels[unknown]] : [],
     parts: [],
-    hint: 'check that every node has a DC path to gnd and that no two sources fix the same voltage',
+    hint: 'check that a resistor, source or inductor joins every node to gnd, and that no two sources fix the same voltage',
   };
 }
 
@@ -95,9 +95,10 @@ function findFloatingNodes(devices: readonly Device[], topology: Topology): Sing
   const touching = devices
     .filter((d) => d.links().some((l) => l.kind === 'none' && (floating.includes(topology.labels[l.a]) || floating.includes(topology.labels[l.b]))))
     .map((d) => d.name);
-  const nodeWord = floating.length === 1 ? `node ${floating[0]} has` : `nodes ${listWords(floating)} have`;
+  const subject = floating.length === 1 ? `node ${floating[0]} floats` : `nodes ${listWords(floating)} float`;
+  const around = touching.length > 0 ? ` (only ${listWords(touching)} touch${touching.length === 1 ? 'es' : ''} ${floating.length === 1 ? 'it' : 'them'})` : '';
   return {
-    message: `${nodeWord} no DC path to gnd`,
+    message: `${subject}: nothing that conducts at DC (resistor, source, inductor) joins ${floating.length === 1 ? 'it' : 'them'} to gnd, so ${floating.length === 1 ? 'its' : 'their'} steady voltage is undefined${around}`,
     nodes: floating,
     parts: touching,
     hint: touching.length > 0

@@ -19,12 +19,12 @@ export interface RunStats {
   maxStep: number;
 }
 
-/** Output of a transient run: one Float64Array column per probe on the output grid. */
+/** Output of a transient run: one Float64Array column per recorded node on the output grid. */
 export interface TransientResult {
   readonly time: Float64Array;
-  /** Column per probe name, same length as `time`. */
+  /** Column per recorded node, same length as `time`. */
   readonly columns: ReadonlyMap<string, Float64Array>;
-  readonly probes: readonly string[];
+  readonly recorded: readonly string[];
   readonly stats: RunStats;
   /** The DC operating point: voltage of every named node at t = 0. */
   readonly operatingPoint: ReadonlyMap<string, number>;
@@ -35,7 +35,7 @@ export interface SimulateOptions {
   /** Watchers inside the step loop (ADC samplers, saturation trackers). */
   observers?: readonly StepObserver[];
   /**
-   * Called once per output row with the row's time and probe values (in `probes` order).
+   * Called once per output row with the row's time and recorded values (in `recorded` order).
    * The array is reused between calls: copy it to keep it.
    */
   onRow?: (time: number, values: Float64Array) => void;

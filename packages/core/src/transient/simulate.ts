@@ -50,9 +50,9 @@ export function simulate(circuit: Circuit, options: SimulateOptions = {}): Trans
     topology,
     {
       maxIterations: NEWTON_ITERATIONS,
-      relative: settings.relativeTolerance * 1e-2,
-      voltage: settings.voltageTolerance,
-      current: settings.currentTolerance,
+      relative: settings.accuracy.relative * 1e-2,
+      voltage: settings.accuracy.volts,
+      current: settings.accuracy.amps,
     },
     stats,
   );
@@ -71,14 +71,14 @@ export function simulate(circuit: Circuit, options: SimulateOptions = {}): Trans
   equations.accept(x, step);
   const operatingPoint = new Map(topology.labels.slice(0, topology.nodeCount).map((name, i) => [name, x[i]] as const));
 
-  const absolute = Float64Array.from(topology.isCurrent, (c) => (c ? settings.currentTolerance : settings.voltageTolerance));
-  const error = new TruncationError(n, equations.watchedUnknowns(), settings.relativeTolerance, absolute);
+  const absolute = Float64Array.from(topology.isCurrent, (c) => (c ? settings.accuracy.amps : settings.accuracy.volts));
+  const error = new TruncationError(n, equations.watchedUnknowns(), settings.accuracy.relative, absolute);
   error.restart(0, x);
 
   const observers = new ObserverHub(options.observers ?? [], topology, devices);
   observers.accepted(0, x);
   const grid = new OutputGrid(settings.outputStep, duration);
-  const output = new OutputRecorder(grid, Int32Array.from(circuit.probes, (p) => topology.node(p)), options.keepColumns !== false, options.onRow);
+  const output = new OutputRecorder(grid, Int32Array.from(circuit.recorded, (p) => topology.node(p)), options.keepColumns !== false, options.onRow);
   output.record(0, x);
 
   let t = 0;
@@ -179,8 +179,8 @@ export function simulate(circuit: Circuit, options: SimulateOptions = {}): Trans
     }
   }
 
-  const columns = new Map(circuit.probes.map((p, i) => [p, output.columns[i]] as const));
-  return { time: output.time, columns, probes: circuit.probes, stats, operatingPoint };
+  const columns = new Map(circuit.recorded.map((p, i) => [p, output.columns[i]] as const));
+  return { time: output.time, columns, recorded: circuit.recorded, stats, operatingPoint };
 }
 
 function stuck(t: number, nodes: string[], why: string): SimulationError {
@@ -188,6 +188,6 @@ function stuck(t: number, nodes: string[], why: string): SimulationError {
     `the step size fell below its floor at t = ${formatSI(t, 's', 6)}: ${why} at ${nodes.join(', ')}`,
     t,
     nodes,
-    'look for an edge much faster than the circuit around it, a missing resistance in a loop, or loosen `relative-tolerance`',
+    'look for an edge much faster than the circuit around it, a missing resistance in a loop, or loosen `accuracy: { relative }`',
   );
 }

@@ -3,7 +3,7 @@ import type { Quantity } from '../units/quantity.ts';
 import { quantities } from '../units/quantity.ts';
 import { parseQuantity } from '../units/si.ts';
 import type { Wave, WaveKind } from './wave.ts';
-import { checkTimes, pointsWave, readRepeat } from './points.ts';
+import { checkTimes, pointsWave, readPeriod } from './points.ts';
 
 /** Reporting stops after this many problems in one CSV file; the rest are likely the same. */
 const maxReportedRows = 10;
@@ -51,10 +51,10 @@ export function parseCsvPoints(text: string, quantity: Quantity, report: (line: 
   return points;
 }
 
-/** `file: input.csv`: points read from a CSV file next to the circuit file; optional `repeat`. */
+/** `file: input.csv`: points read from a CSV file next to the circuit file; optional `every`. */
 export const file: WaveKind = {
   key: 'file',
-  summary: 'points from a CSV file of time,value rows next to the circuit file; optional `repeat: period`',
+  summary: 'points from a CSV file of time,value rows next to the circuit file; optional `every: period`',
   read(main: ValueReader, options, context, quantity): Wave {
     const fallback = pointsWave([], [], Infinity);
     const path = main.text();
@@ -82,7 +82,7 @@ export const file: WaveKind = {
     const csv = parseCsvPoints(text, quantity, report);
     if (csv.times.length === 0 && problems === 0) main.fail(`${path} has no data rows`, 'write one time,value point per line, e.g. 0,0');
     checkTimes(csv.times, (i, message, hint) => report(csv.lines[i], message, hint));
-    const period = readRepeat(options, csv.times.length > 0 ? csv.times[csv.times.length - 1] : 0);
+    const period = readPeriod(options, csv.times.length > 0 ? csv.times[csv.times.length - 1] : 0);
     return pointsWave(csv.times, csv.values, period);
   },
 };

@@ -6,7 +6,7 @@ import { nextPeriodicCorner, timeInPeriod } from './periodic.ts';
 
 /**
  * Straight lines between given points; the first value holds before the first point and the
- * last value after the last point. With a repeat period the pattern (including that hold)
+ * last value after the last point. With a period (`every:`) the pattern (including that hold)
  * restarts at every multiple of the period, jumping back to the first value.
  */
 export class PiecewiseLinearWave implements Wave {
@@ -73,24 +73,24 @@ export function checkTimes(times: readonly number[], report: (index: number, mes
   }
 }
 
-/** The optional `repeat:` period next to a point list; Infinity when absent or invalid. */
-export function readRepeat(options: MapReader, lastTime: number): number {
-  const value = options.get('repeat');
+/** The optional `every:` period next to a point list; Infinity when absent or invalid. */
+export function readPeriod(options: MapReader, lastTime: number): number {
+  const value = options.get('every');
   if (value === undefined) return Infinity;
   const period = value.number(quantities.time, { above: 0 });
   if (period < lastTime) {
     value.fail(
-      `repeat period ${formatSI(period, 's')} is shorter than the last point's time ${formatSI(lastTime, 's')}`,
+      `every: ${formatSI(period, 's')} is shorter than the last point's time ${formatSI(lastTime, 's')}`,
       'the period must be at least the time of the last point',
     );
   }
   return period >= lastTime ? period : Infinity;
 }
 
-/** `points: [[0, 0], [1m, 5], [2m, 5]]`, optional `repeat: 4m`. */
+/** `points: [[0, 0], [1m, 5], [2m, 5]]`, optional `every: 4m`. */
 export const points: WaveKind = {
   key: 'points',
-  summary: 'straight lines through [time, value] points; optional `repeat: period`',
+  summary: 'straight lines through [time, value] points; optional `every: period`',
   read(main: ValueReader, options: MapReader, _context, quantity): Wave {
     const items = main.list();
     if (items.length === 0 && main.kind() === 'list') main.fail('a point list needs at least one point', 'write points: [[0, 0], [1m, 5]]');
@@ -112,7 +112,7 @@ export const points: WaveKind = {
       timeReaders.push(item);
     });
     checkTimes(times, (i, message, hint) => timeReaders[i].fail(message, hint));
-    const period = readRepeat(options, times.length > 0 ? times[times.length - 1] : 0);
+    const period = readPeriod(options, times.length > 0 ? times[times.length - 1] : 0);
     return pointsWave(times, values, period);
   },
 };

@@ -1,12 +1,12 @@
 import { estimateDelay } from './time-alignment.ts';
 
-/** A sampled waveform: times in seconds, increasing; values in the probe's unit. */
+/** A sampled waveform: times in seconds, increasing; values in the signal's unit. */
 export interface Trace {
   readonly time: ArrayLike<number>;
   readonly values: ArrayLike<number>;
 }
 
-/** Expected limits of one probe on their time grid (increasing times). */
+/** Expected limits of one signal on their time grid (increasing times). */
 export interface EnvelopeTrace {
   readonly time: ArrayLike<number>;
   readonly min: ArrayLike<number>;
@@ -22,7 +22,7 @@ export interface CompareOptions {
   shift?: 'auto' | number;
   /** Largest delay `'auto'` considers, either way (default: half the envelope's span). */
   maxShift?: number;
-  /** Widen the limits by this much on both sides (probe unit), for measurement noise. Default 0. */
+  /** Widen the limits by this much on both sides (signal unit), for measurement noise. Default 0. */
   margin?: number;
   /** Check each sample against the widest limits within ± this time (seconds), for jitter. Default 0. */
   timeMargin?: number;

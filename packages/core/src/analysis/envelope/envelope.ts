@@ -42,10 +42,10 @@ export interface AdcEnvelope {
   readonly max: Int32Array;
 }
 
-/** Min, nominal and max per probe on the circuit's output grid, and per ADC its codes. */
+/** Min, nominal and max per recorded node on the circuit's output grid, and per ADC its codes. */
 export interface Envelope {
   readonly time: Float64Array;
-  readonly probes: readonly string[];
+  readonly recorded: readonly string[];
   readonly nominal: ReadonlyMap<string, Float64Array>;
   readonly min: ReadonlyMap<string, Float64Array>;
   readonly max: ReadonlyMap<string, Float64Array>;
@@ -110,7 +110,7 @@ export function runVariants(plan: EnvelopePlan, from: number, end: number, onRun
 
 /** An empty fold shaped like `run` (every run of a plan has the same rows and conversions). */
 export function foldFor(plan: EnvelopePlan, run: CircuitRun): EnvelopeFold {
-  return new EnvelopeFold(plan.circuit.probes, run.transient.time.length, run.adcs.map((adc) => adc.code.length));
+  return new EnvelopeFold(plan.circuit.recorded, run.transient.time.length, run.adcs.map((adc) => adc.code.length));
 }
 
 /** "Monte Carlo run 17 (seed 1), R1.resistor at -43.0% of its tolerance, ...", for failure messages. */
@@ -123,17 +123,17 @@ export function describeVariant(plan: EnvelopePlan, index: number, deviations: A
 /** Put the nominal run and the folded variants together (the nominal is inside the bounds). */
 export function assembleEnvelope(plan: EnvelopePlan, nominal: CircuitRun, variants: EnvelopeBounds): Envelope {
   const { time, columns } = nominal.transient;
-  const probes = plan.circuit.probes;
+  const recorded = plan.circuit.recorded;
   const fold = foldFor(plan, nominal);
   fold.add(nominal);
   if (variants.runs > 0) fold.merge(variants);
   const { min, max, codeMin, codeMax } = fold.bounds();
   return {
     time,
-    probes,
-    nominal: new Map(probes.map((p) => [p, columns.get(p)!])),
-    min: new Map(probes.map((p, i) => [p, min[i]])),
-    max: new Map(probes.map((p, i) => [p, max[i]])),
+    recorded,
+    nominal: new Map(recorded.map((p) => [p, columns.get(p)!])),
+    min: new Map(recorded.map((p, i) => [p, min[i]])),
+    max: new Map(recorded.map((p, i) => [p, max[i]])),
     adcs: nominal.adcs.map((adc, a) => ({ name: adc.spec.name, index: adc.index, time: adc.time, min: codeMin[a], nominal: adc.code, max: codeMax[a] })),
     varied: plan.slots.map((s) => ({ part: s.part, key: s.tolerance.key, mode: s.tolerance.mode, amount: s.tolerance.amount, distribution: s.tolerance.distribution })),
     runs: plan.runs,
@@ -144,7 +144,7 @@ export function assembleEnvelope(plan: EnvelopePlan, nominal: CircuitRun, varian
 
 /**
  * Tolerance envelope of a circuit in this thread: the nominal run, `runs` seeded Monte Carlo
- * draws and, when asked, the worst-case corners, folded into min, nominal and max per probe.
+ * draws and, when asked, the worst-case corners, folded into min, nominal and max per recorded node.
  * The command line spreads the same plan over worker threads with identical results.
  */
 export function envelope(circuit: Circuit, options: EnvelopeOptions = {}): Envelope {

@@ -1,8 +1,8 @@
 import type { CircuitRun } from '../run-circuit.ts';
 
 /**
- * Lowest and highest value per probe and output row, and lowest and highest code per ADC
- * and conversion, over a set of runs (probes and ADCs in the circuit's order). Minimum and
+ * Lowest and highest value per recorded node and output row, and lowest and highest code per ADC
+ * and conversion, over a set of runs (recorded and ADCs in the circuit's order). Minimum and
  * maximum do not depend on the order runs arrive in, so bounds folded in any split (one
  * worker or many) are bit for bit the same.
  */
@@ -25,12 +25,12 @@ export class EnvelopeFold {
 
   /** `conversions`: how many codes each ADC returns in a run. */
   constructor(
-    private readonly probes: readonly string[],
+    private readonly recorded: readonly string[],
     private readonly rows: number,
     conversions: readonly number[],
   ) {
-    this.#min = probes.map(() => new Float64Array(rows).fill(Infinity));
-    this.#max = probes.map(() => new Float64Array(rows).fill(-Infinity));
+    this.#min = recorded.map(() => new Float64Array(rows).fill(Infinity));
+    this.#max = recorded.map(() => new Float64Array(rows).fill(-Infinity));
     this.#codeMin = conversions.map((n) => new Int32Array(n).fill(2 ** 31 - 1));
     this.#codeMax = conversions.map((n) => new Int32Array(n).fill(-(2 ** 31)));
   }
@@ -38,8 +38,8 @@ export class EnvelopeFold {
   add(run: CircuitRun): void {
     const { transient, adcs } = run;
     if (transient.time.length !== this.rows) throw new Error(`internal: a varied run has ${transient.time.length} rows, the nominal ${this.rows}`);
-    this.probes.forEach((probe, p) => {
-      const column = transient.columns.get(probe)!;
+    this.recorded.forEach((node, p) => {
+      const column = transient.columns.get(node)!;
       widen(this.#min[p], this.#max[p], column, column);
     });
     adcs.forEach((adc, a) => {
@@ -50,7 +50,7 @@ export class EnvelopeFold {
   }
 
   merge(bounds: EnvelopeBounds): void {
-    this.probes.forEach((_, p) => widen(this.#min[p], this.#max[p], bounds.min[p], bounds.max[p]));
+    this.recorded.forEach((_, p) => widen(this.#min[p], this.#max[p], bounds.min[p], bounds.max[p]));
     this.#codeMin.forEach((min, a) => widen(min, this.#codeMax[a], bounds.codeMin[a], bounds.codeMax[a]));
     this.#runs += bounds.runs;
   }
@@ -58,6 +58,24 @@ export class EnvelopeFold {
   bounds(): EnvelopeBounds {
     return { min: this.#min, max: this.#max, codeMin: this.#codeMin, codeMax: this.#codeMax, runs: this.#runs };
   }
+}
+
+/**
+ * Fold partial bounds of one plan (from worker slices or from shards run on other machines)
+ * into one. Empty parts (no runs) are skipped; the result does not depend on their order.
+ */
+export function mergeBounds(parts: readonly EnvelopeBounds[]): EnvelopeBounds {
+  const filled = parts.filter((part) => part.runs > 0);
+  if (filled.length === 0) return { min: [], max: [], codeMin: [], codeMax: [], runs: 0 };
+  const [first, ...rest] = filled;
+  const copy = <T extends Float64Array | Int32Array>(arrays: readonly T[]) => arrays.map((a) => a.slice() as T);
+  const merged = { min: copy(first.min), max: copy(first.max), codeMin: copy(first.codeMin), codeMax: copy(first.codeMax), runs: first.runs };
+  for (const part of rest) {
+    merged.min.forEach((min, p) => widen(min, merged.max[p], part.min[p], part.max[p]));
+    merged.codeMin.forEach((min, a) => widen(min, merged.codeMax[a], part.codeMin[a], part.codeMax[a]));
+    merged.runs += part.runs;
+  }
+  return merged;
 }
 
 function widen<T extends Float64Array | Int32Array>(min: T, max: T, low: ArrayLike<number>, high: ArrayLike<number>): void {

@@ -16,7 +16,7 @@ import { FINDINGS_SCHEMA, type Findings, type FindingsOptions } from './types.ts
 /**
  * The saturation and ringing analyses of one run. Hand `observers` to `simulate`; after the
  * run, `finish` turns what they saw into `Findings`. Nodes examined for ringing are the
- * probes and every op-amp output, recorded at the output rows by an observer of their own,
+ * recorded and every op-amp output, recorded at the output rows by an observer of their own,
  * so the analysis works when the run keeps no columns.
  */
 export class FindingsWatch {
@@ -31,7 +31,7 @@ export class FindingsWatch {
     private readonly options: FindingsOptions = {},
   ) {
     const outputs = this.amps().map((a) => a.pins.find((p) => p.pin === 'out')!.node);
-    this.nodes = [...new Set([...circuit.probes, ...outputs])].filter((n) => n !== 'gnd');
+    this.nodes = [...new Set([...circuit.recorded, ...outputs])].filter((n) => n !== 'gnd');
     this.saturation = new SaturationTracker(circuit, options);
     this.recorder = new RowRecorder(circuit, this.nodes);
     this.guard = new TwoStepGuard(this.nodes);

@@ -32,6 +32,6 @@ export interface FindingsStats extends RunStats {
   readonly rows: number;
   /** Events (corner clusters and rail exits) after which ringing was looked for. */
   readonly events: number;
-  /** Nodes examined for ringing: probes and op-amp outputs. */
+  /** Nodes examined for ringing: recorded and op-amp outputs. */
   readonly nodes: readonly string[];
 }

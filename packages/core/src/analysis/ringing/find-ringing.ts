@@ -1,6 +1,6 @@
 import { formatSI } from '../../units/format.ts';
 import { clusterEvents } from './events.ts';
-import { measureOscillation } from './oscillation.ts';
+import { oscillationFigures } from './oscillation.ts';
 import { spectralPeak } from './spectral-peak.ts';
 import type { ReportWarning, RingingEvent, RingingFinding, RingingOptions } from './types.ts';
 
@@ -60,7 +60,7 @@ export function findRinging(
       // The last row at or before the event's first corner: the value before the event.
       const atFirst = Math.min(rowAtOrAfter(cluster.first), rows - 1);
       const iBefore = time[atFirst] > cluster.first + outputStep * 1e-6 ? Math.max(0, atFirst - 1) : atFirst;
-      const found = measureOscillation(time, values, i0, i1, values[iBefore], cluster.last, settleBand);
+      const found = oscillationFigures(time, values, i0, i1, values[iBefore], cluster.last, settleBand);
       if (found === null) return;
       const rowsPerPeriod = 1 / (found.frequency * outputStep);
       if (rowsPerPeriod < METHOD_ROWS) {

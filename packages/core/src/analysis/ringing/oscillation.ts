@@ -45,7 +45,7 @@ export interface Oscillation {
  * gives the decrement per half cycle; doubled, the logarithmic decrement delta per cycle, and
  * zeta = delta / sqrt(4 pi^2 + delta^2).
  */
-export function measureOscillation(
+export function oscillationFigures(
   time: Float64Array,
   values: Float64Array,
   i0: number,

@@ -12,7 +12,7 @@ export interface RingingOptions {
 
 /** A damped (or sustained) oscillation seen on one node after one event. */
 export interface RingingFinding {
-  /** Node name (a probe or an op-amp output). */
+  /** Node name (a recorded node or an op-amp output). */
   readonly node: string;
   /** Time of the event the oscillation follows, seconds. */
   readonly start: number;
