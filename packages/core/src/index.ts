@@ -40,6 +40,7 @@ export type { AdcReport, ClippedSamples, CodeError, TimeInterval } from './analy
 // Tolerance envelopes and comparing captures against them.
 export { envelope, envelopePlan, runVariants, assembleEnvelope } from './analysis/envelope/envelope.ts';
 export type { Envelope, AdcEnvelope, EnvelopeOptions, EnvelopePlan } from './analysis/envelope/envelope.ts';
+export type { ToleranceSlot } from './analysis/envelope/varied-circuit.ts';
 export { mergeBounds } from './analysis/envelope/fold.ts';
 export type { EnvelopeBounds } from './analysis/envelope/fold.ts';
 export { compare } from './analysis/envelope/compare.ts';

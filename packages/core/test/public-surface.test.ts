@@ -28,7 +28,7 @@ describe('the public surface of @voltcast/core', () => {
         'SaturationInterval', 'SlewInterval', 'CurrentLimitInterval', 'Interval', 'SaturationOptions',
         'RingingFinding', 'RingingOptions', 'RingingEvent', 'ReportWarning', 'AdcReadout', 'AdcReport', 'ClippedSamples', 'CodeError', 'TimeInterval',
         // envelopes and compare
-        'envelope', 'envelopePlan', 'runVariants', 'assembleEnvelope', 'Envelope', 'AdcEnvelope', 'EnvelopeOptions', 'EnvelopePlan',
+        'envelope', 'envelopePlan', 'runVariants', 'assembleEnvelope', 'Envelope', 'AdcEnvelope', 'EnvelopeOptions', 'EnvelopePlan', 'ToleranceSlot',
         'mergeBounds', 'EnvelopeBounds', 'compare', 'Trace', 'EnvelopeTrace', 'CompareOptions', 'Comparison', 'Violation', 'Tolerance', 'Distribution',
         // op-amp classes
         'opampPresets', 'opampPresetNames', 'OpampParameters', 'OpampPresetName',

@@ -2,8 +2,8 @@ import type { NumberLimits } from '../reading/reader.ts';
 import type { Quantity } from '../units/quantity.ts';
 
 /** How draws spread between a tolerance's limits. */
-export const distributions = ['uniform', 'normal'] as const;
-export type Distribution = (typeof distributions)[number];
+export type Distribution = 'uniform' | 'normal';
+export const distributions: readonly Distribution[] = ['uniform', 'normal'];
 
 /** How far one value of a part may stray from its nominal, as written under `tolerance:`. */
 export interface Tolerance {

@@ -4,6 +4,7 @@ import type { PartSpecBase } from '../../parts/part-kind.ts';
 import { deviated, type TolerableValue, type Tolerance } from '../../parts/tolerance.ts';
 
 /** One toleranced value of a circuit: which part, which of its values, how far it may stray. */
+/** One toleranced value of a circuit: an axis along which an envelope varies it. */
 export interface ToleranceSlot {
   readonly part: string;
   readonly partIndex: number;
