@@ -4,7 +4,7 @@ import { join } from 'node:path';
 import { describe, expect, test, type TestContext } from 'vitest';
 import { runCli } from './support/run-cli.ts';
 
-// Exit codes and message shapes are the DESIGN.md command-line contract: 2 for bad input with
+// Exit codes and message shapes are the command-line contract of docs/cli.md: 2 for bad input with
 // file:line:column, 1 for a failed simulation with time and nodes, and never a finished-looking
 // output folder after a failure.
 
@@ -164,7 +164,7 @@ record: [mid]
     const floating = good.replace('between: [out, gnd] }', 'between: [out, mid] }\n  C2: { capacitor: 1u, between: [mid, gnd] }');
     writeFileSync(goodFile, floating);
     expect((await runCli(['run', goodFile, '--out', out, '--quiet'])).code).toBe(1);
-    expect(readdirSync(out).sort()).toEqual(['report.json', 'report.txt', 'waveforms.csv']);
+    expect(readdirSync(out).sort()).toEqual(['.voltcast-output', 'report.json', 'report.txt', 'waveforms.csv']);
     expect(readdirSync(scratch).sort()).toEqual(['good.yaml', 'result']);
   });
 });

@@ -26,7 +26,7 @@ describe.each(fixtures)('voltcast run fixtures/$file', ({ file, recorded, durati
     const { code, stdout, stderr } = await runCli(['run', join(repoRoot, 'fixtures', file), '--out', out]);
     expect(stderr).toBe('');
     expect(code).toBe(0);
-    expect(readdirSync(out).sort()).toEqual([...files, 'report.json', 'report.txt', 'waveforms.csv'].sort());
+    expect(readdirSync(out).sort()).toEqual(['.voltcast-output', ...files, 'report.json', 'report.txt', 'waveforms.csv'].sort());
     expect(readdirSync(scratch)).toEqual(['result']); // the staging folder is gone
 
     const lines = readFileSync(join(out, 'waveforms.csv'), 'utf8').trimEnd().split('\n');
@@ -63,13 +63,24 @@ describe.each(fixtures)('voltcast run fixtures/$file', ({ file, recorded, durati
 });
 
 describe('output folder', () => {
-  test('a successful run replaces the folder of an earlier run as a whole', async () => {
+  test("a successful run replaces an earlier run's folder as a whole", async () => {
     const out = join(scratch, 'result');
-    mkdirSync(out);
-    writeFileSync(join(out, 'stale.txt'), 'from an earlier run');
+    expect((await runCli(['run', join(repoRoot, 'fixtures/demo-strain-front-end.yaml'), '--out', out, '--quiet'])).code).toBe(0);
+    expect(readdirSync(out)).toContain('adc-TRAY.csv');
     const { code } = await runCli(['run', join(repoRoot, 'fixtures/supply-ringing.yaml'), '--out', out, '--quiet']);
     expect(code).toBe(0);
-    expect(readdirSync(out).sort()).toEqual(['report.json', 'report.txt', 'waveforms.csv']);
+    expect(readdirSync(out).sort()).toEqual(['.voltcast-output', 'report.json', 'report.txt', 'waveforms.csv']);
+    expect(readdirSync(scratch)).toEqual(['result']);
+  });
+
+  test('a folder voltcast did not write is refused (exit 2) and left as it was', async () => {
+    const out = join(scratch, 'result');
+    mkdirSync(out);
+    writeFileSync(join(out, 'stale.txt'), 'not from voltcast');
+    const { code, stderr } = await runCli(['run', join(repoRoot, 'fixtures/supply-ringing.yaml'), '--out', out, '--quiet']);
+    expect(code).toBe(2);
+    expect(stderr).toMatch(/holds files voltcast did not write \(stale\.txt\)/);
+    expect(readdirSync(out)).toEqual(['stale.txt']);
   });
 
   test('without --out the run writes to out/<file base name> under the current folder', async () => {

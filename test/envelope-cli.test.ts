@@ -2,7 +2,7 @@ import { mkdtempSync, readFileSync, readdirSync, rmSync, writeFileSync } from 'n
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, beforeAll, describe, expect, test } from 'vitest';
-import { runCli } from './support/run-cli.ts';
+import { runCli, runCliUntil } from './support/run-cli.ts';
 
 // An invented divider with an RC: four toleranced values, small enough for quick runs.
 const circuit = `circuit: invented-envelope-workers
@@ -41,7 +41,7 @@ describe('voltcast envelope', () => {
     const two = await envelopeCsv('two', '--runs', '40', '--seed', '11', '--corners', '--workers', '2', '--plot');
     expect(two).toBe(one);
     expect(adcCsv('two')).toBe(adcCsv('one'));
-    expect(readdirSync(join(scratch, 'two')).sort()).toEqual(['envelope-adc-CONV.csv', 'envelope.csv', 'plot.svg']);
+    expect(readdirSync(join(scratch, 'two')).sort()).toEqual(['.voltcast-output', 'envelope-adc-CONV.csv', 'envelope.csv', 'plot.svg']);
     const lines = one.trimEnd().split('\n');
     expect(lines[0]).toBe('time,mid.min,mid.nominal,mid.max');
     expect(lines.length).toBe(1 + 101);
@@ -54,9 +54,19 @@ describe('voltcast envelope', () => {
     // The converter's last code: 12 bits over 0..5 V round to the nearest code (IEEE Std 1241's
     // ideal ADC), so code = round(v / 5 · 4096) for each of min, nominal and max.
     const codes = adcCsv('one').trimEnd().split('\n');
-    expect(codes[0]).toBe('index,time,code.min,code.nominal,code.max');
+    expect(codes[0]).toBe('index,time,CONV.min,CONV.nominal,CONV.max'); // named by the converter
     const [, , codeMin, codeNominal, codeMax] = codes.at(-1)!.split(',').map(Number);
     expect([codeMin, codeNominal, codeMax]).toEqual([min, nominal, max].map((v) => Math.round((v / 5) * 4096)));
+  });
+
+  test('says up front how long a huge envelope will take: one run timed, times the runs', async () => {
+    const out = join(scratch, 'huge');
+    const said = await runCliUntil(['envelope', file, '--runs', '1e9', '--workers', '1', '--out', out], /this takes about/);
+    const [, oneRun, unit, total, totalUnit] = /envelope: 1000000000 runs on 1 worker; one run took ([\d.]+) (ms|s), so this takes about ([\d.]+) (days|h)\n {2}fewer --runs finish sooner/.exec(said)!;
+    // Both figures are printed to 2 significant digits, so they agree within about 10%.
+    const days = (Number(oneRun) * (unit === 'ms' ? 1e-3 : 1) * 1e9) / 86_400;
+    expect(totalUnit).toBe('days');
+    expect(Math.abs(Number(total) / days - 1)).toBeLessThan(0.1);
   });
 
   test('refuses to run with nothing to vary or a bad run count (exit 2)', async () => {

@@ -2,6 +2,7 @@ import { readdirSync, readFileSync, statSync } from 'node:fs';
 import { join, relative } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { readCircuit } from '@voltcast/core';
+import { program } from '../packages/cli/src/program.ts';
 import { repoRoot } from './support/run-cli.ts';
 
 // Spellings voltcast gave up for names of its own. They may appear only in this file, which
@@ -35,6 +36,11 @@ describe('retired names', () => {
       });
     }
     expect(found).toEqual([]);
+  });
+
+  it('--probe is an unknown option of compare', async () => {
+    const parsed = program(() => undefined).parseAsync(['node', 'voltcast', 'compare', 'capture.csv', 'envelope.csv', '--probe', 'adc']);
+    await expect(parsed).rejects.toMatchObject({ code: 'commander.unknownOption', exitCode: 1 });
   });
 
   const base = 'circuit: old\nparts:\n  V1: { voltage: { points: [[0, 0], [1m, 1]] }, between: [in, gnd] }\n  R1: { resistor: 1k, between: [in, gnd] }\nsimulate: { duration: 1m }\n';

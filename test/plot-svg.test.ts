@@ -5,6 +5,8 @@ import { runFigure } from '../packages/cli/src/plot/run-plot.ts';
 import { envelopeFigure } from '../packages/cli/src/plot/envelope-plot.ts';
 import { compareFigure } from '../packages/cli/src/plot/compare-plot.ts';
 import { siLabel } from '../packages/cli/src/plot/si-format.ts';
+import { readCircuitFile } from '../packages/cli/src/read-circuit-file.ts';
+import { repoRoot } from './support/run-cli.ts';
 import { xmlProblems } from './support/xml-well-formed.ts';
 
 // An invented RC filter with a 5% resistor; the capture below is synthetic.
@@ -75,12 +77,61 @@ describe('SVG plots', () => {
     const capture = { time: result.time, values: Float64Array.from(limits.nominal, (v, i) => (i >= 100 && i < 110 ? v + 1 : v)) };
     const verdict = compare(capture, limits);
     expect(verdict.violations.length).toBe(10); // rows 100..109, by construction
-    const svg = renderFigure(compareFigure('out', capture, limits, verdict, 'capture.csv against envelope.csv'));
+    const svg = renderFigure(compareFigure('out', 'voltage', capture, limits, verdict, 'capture.csv against envelope.csv'));
     expect(xmlProblems(svg)).toEqual([]);
     expect(paths(svg).series).toEqual(['expected min..max', 'expected nominal', 'measured', 'violations (10)']);
     // Ten circles, each drawn as two arcs in the one path.
     const marks = /data-series="violations \(10\)"[^>]* d="([^"]*)"/.exec(svg)![1];
     expect(marks.match(/a/g)!.length).toBe(20);
+  });
+
+  it('circle the first 20 of many violations and shade the spans of the rest', () => {
+    const result = envelope(circuit, { corners: true });
+    const limits = { time: result.time, min: result.min.get('out')!, nominal: result.nominal.get('out')!, max: result.max.get('out')! };
+    // Rows 100..399 and 450..549 are 1 V high: 400 violations in two runs, by construction.
+    const high = (i: number) => (i >= 100 && i < 400) || (i >= 450 && i < 550);
+    const capture = { time: result.time, values: Float64Array.from(limits.nominal, (v, i) => (high(i) ? v + 1 : v)) };
+    const verdict = compare(capture, limits);
+    expect(verdict.violations.length).toBe(400);
+    const svg = renderFigure(compareFigure('out', 'voltage', capture, limits, verdict, 'capture.csv against envelope.csv'));
+    expect(xmlProblems(svg)).toEqual([]);
+    expect(paths(svg).series).toEqual(['expected min..max', 'expected nominal', 'measured', 'first 20 violations', '380 more violations']);
+    const marks = /data-series="first 20 violations"[^>]* d="([^"]*)"/.exec(svg)![1];
+    expect(marks.match(/a/g)!.length).toBe(40); // 20 circles of two arcs
+    // The rest: rows 120..399 and 450..549, two shaded spans.
+    const spans = /data-series="380 more violations"[^>]* d="([^"]*)"/.exec(svg)![1];
+    expect(spans.match(/Z/g)!.length).toBe(2);
+  });
+
+  it('label an axis of ADC codes with whole codes, not volts', () => {
+    const result = envelope(circuit, { corners: true });
+    const adc = result.adcs[0];
+    const limits = { time: adc.time, min: adc.min, nominal: adc.nominal, max: adc.max };
+    const verdict = compare({ time: adc.time, values: adc.nominal }, limits);
+    const svg = renderFigure(compareFigure('CONV', 'code', { time: adc.time, values: adc.nominal }, limits, verdict, 'codes.csv against envelope-adc-CONV.csv'));
+    const labels = [.../<g class="axis value"[^>]*>(.*?)<\/g>/.exec(svg)![1].matchAll(/<text[^>]*>([^<]*)<\/text>/g)].map((m) => m[1]);
+    expect(labels.length).toBeGreaterThan(2);
+    for (const label of labels) expect(label).toMatch(/^-?\d+$/);
+  });
+
+  it('keep every legend above its panel, off the data (the demo)', () => {
+    const { circuit: demo, fileName } = readCircuitFile(`${repoRoot}fixtures/demo-strain-front-end.yaml`);
+    const run = runCircuit(demo, { keepColumns: true });
+    const svg = renderFigure(runFigure(demo, fileName, run.transient, run.adcs, run.findings.saturation));
+    expect(xmlProblems(svg)).toEqual([]);
+    const panels = svg.split('<g class="panel">').slice(1);
+    expect(panels.length).toBe(1 + run.adcs.length);
+    for (const panel of panels) {
+      const frameTop = Number(/<rect class="frame" x="[\d.]+" y="([\d.]+)"/.exec(panel)![1]);
+      const legend = /<g class="legend"[^>]*>(.*)<\/g>/.exec(panel)![1];
+      // Lowest point of any key: a swatch's bottom edge (y + height, cy + r, y2) or a name's baseline.
+      const bottoms = [...legend.matchAll(/<(rect|circle|line|text)\b([^>]*)>/g)].map(([, tag, attrs]) => {
+        const at = (name: string) => Number(new RegExp(` ${name}="([-\\d.]+)"`).exec(attrs)?.[1] ?? NaN);
+        return tag === 'rect' ? at('y') + at('height') : tag === 'circle' ? at('cy') + at('r') : tag === 'line' ? Math.max(at('y1'), at('y2')) : at('y');
+      });
+      expect(bottoms.length).toBeGreaterThan(0);
+      expect(Math.max(...bottoms)).toBeLessThan(frameTop);
+    }
   });
 
   it('label axes with SI prefixes', () => {

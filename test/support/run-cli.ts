@@ -28,3 +28,20 @@ export function runCli(args: readonly string[], cwd = repoRoot): Promise<CliOutc
     child.on('close', (code) => resolve({ code, stdout, stderr }));
   });
 }
+
+/**
+ * Start the CLI, wait until its stderr matches `until`, then stop it (SIGTERM, this child
+ * only); resolves with what it printed so far. For commands that would run for long.
+ */
+export function runCliUntil(args: readonly string[], until: RegExp, cwd = repoRoot): Promise<string> {
+  return new Promise((resolve, reject) => {
+    const child = spawn(process.execPath, ['--import', tsxLoader, `${repoRoot}packages/cli/src/main.ts`, ...args], { cwd, stdio: ['ignore', 'ignore', 'pipe'] });
+    let stderr = '';
+    child.stderr.setEncoding('utf8').on('data', (chunk: string) => {
+      stderr += chunk;
+      if (until.test(stderr)) child.kill('SIGTERM');
+    });
+    child.on('error', reject);
+    child.on('close', () => (until.test(stderr) ? resolve(stderr) : reject(new Error(`the CLI ended without printing ${until}:\n${stderr}`))));
+  });
+}

@@ -1,6 +1,6 @@
 import { SimulationError, formatSI } from '@voltcast/core';
 
-/** Process exit codes of the DESIGN.md command-line contract. */
+/** Process exit codes of the command line (docs/cli.md, "Exit status"). */
 export const exitCodes = {
   ok: 0,
   /** The circuit was valid but the simulation itself failed. */

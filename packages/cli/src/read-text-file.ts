@@ -14,11 +14,19 @@ export function readTextFile(path: string, what: string): string {
   }
 }
 
-/** Why a file could not be read, in words rather than an error code. */
+const reasons: Readonly<Record<string, string>> = {
+  ENOENT: 'no such file',
+  EISDIR: 'it is a folder, not a file',
+  ENOTDIR: 'a part of the path is a file, not a folder',
+  EEXIST: 'a file of that name is in the way',
+  EACCES: 'permission denied',
+  EPERM: 'permission denied',
+  EROFS: 'the file system is read-only',
+  ENOSPC: 'the disk is full',
+};
+
+/** Why a file could not be read or written, in words rather than an error code. */
 export function reasonOf(error: unknown): string {
-  const code = (error as NodeJS.ErrnoException).code;
-  if (code === 'ENOENT') return 'no such file';
-  if (code === 'EISDIR') return 'it is a folder, not a file';
-  if (code === 'EACCES') return 'permission denied';
-  return error instanceof Error ? error.message : String(error);
+  const reason = reasons[(error as NodeJS.ErrnoException).code ?? ''];
+  return reason ?? (error instanceof Error ? error.message : String(error));
 }

@@ -3,11 +3,12 @@ import { writeFileSync } from 'node:fs';
 import { basename, extname, join } from 'node:path';
 import { assembleEnvelope, envelopePlan, formatSI, runCircuit, type Envelope } from '@voltcast/core';
 import { readCircuitFile } from '../read-circuit-file.ts';
-import { writeOutputDir } from '../output-dir.ts';
+import { writeOutputDir } from '../output/output-dir.ts';
 import { InputError } from '../exit-codes.ts';
 import { runOnWorkers } from '../envelope/run-pool.ts';
 import { writeAdcEnvelopeCsv, writeEnvelopeCsv } from '../envelope/envelope-csv.ts';
 import { EnvelopeProgress } from '../envelope/envelope-progress.ts';
+import { estimateText } from '../envelope/estimate.ts';
 import { envelopeFigure } from '../plot/envelope-plot.ts';
 import { renderFigure } from '../plot/render-figure.ts';
 
@@ -19,6 +20,7 @@ export interface EnvelopeCommandOptions {
   out?: string;
   plot?: boolean;
   quiet?: boolean;
+  force?: boolean;
 }
 
 /**
@@ -36,28 +38,32 @@ export async function envelopeCommand(file: string, options: EnvelopeCommandOpti
   const plan = envelopePlan(circuit, { runs, seed, corners: options.corners === true });
   if (plan.slots.length === 0) console.error(`${fileName}: warning: no part has a tolerance, so every run is the nominal one\n  add for example \`tolerance: 1%\` to resistors`);
   const startedAt = performance.now();
-  const nominal = runCircuit(circuit);
-  const progress = new EnvelopeProgress(plan.variants, !options.quiet);
-  let result: Envelope;
-  try {
-    const bounds = await runOnWorkers(plan, file, Math.min(workers, Math.max(1, plan.variants)), (done) => progress.update(done));
-    result = assembleEnvelope(plan, nominal, bounds);
-  } finally {
-    progress.stop();
-  }
   const outDir = options.out ?? join('out', `${basename(fileName, extname(fileName))}-envelope`);
-  const files = writeOutputDir(outDir, (staging) => {
+  const { result, files } = await writeOutputDir(outDir, { force: options.force }, async (staging) => {
+    const nominalStart = performance.now();
+    const nominal = runCircuit(circuit);
+    const threads = Math.min(workers, Math.max(1, plan.variants));
+    const estimate = estimateText(plan.variants, threads, (performance.now() - nominalStart) / 1000);
+    if (estimate !== undefined && !options.quiet) console.error(estimate);
+    const progress = new EnvelopeProgress(plan.variants, !options.quiet);
+    let result: Envelope;
+    try {
+      const bounds = await runOnWorkers(plan, file, threads, (done) => progress.update(done));
+      result = assembleEnvelope(plan, nominal, bounds);
+    } finally {
+      progress.stop();
+    }
     writeEnvelopeCsv(join(staging, 'envelope.csv'), result);
-    const written = ['envelope.csv'];
+    const files = ['envelope.csv'];
     for (const adc of result.adcs) {
-      written.push(`envelope-adc-${adc.name}.csv`);
-      writeAdcEnvelopeCsv(join(staging, written.at(-1)!), adc);
+      files.push(`envelope-adc-${adc.name}.csv`);
+      writeAdcEnvelopeCsv(join(staging, files.at(-1)!), adc);
     }
     if (options.plot) {
-      written.push('plot.svg');
+      files.push('plot.svg');
       writeFileSync(join(staging, 'plot.svg'), renderFigure(envelopeFigure(result, circuit.name, fileName)));
     }
-    return written;
+    return { result, files };
   });
   if (!options.quiet) console.log(summary(result, fileName, workers, (performance.now() - startedAt) / 1000, files.map((f) => join(outDir, f))));
 }

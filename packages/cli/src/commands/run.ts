@@ -2,7 +2,7 @@ import { writeFileSync } from 'node:fs';
 import { basename, extname, join } from 'node:path';
 import { runCircuit, type CircuitRun } from '@voltcast/core';
 import { readCircuitFile } from '../read-circuit-file.ts';
-import { writeOutputDir } from '../output-dir.ts';
+import { writeOutputDir } from '../output/output-dir.ts';
 import { WaveformCsv } from '../waveform-csv.ts';
 import { ExtremesTracker } from '../node-extremes.ts';
 import { buildReport, writeReport } from '../report.ts';
@@ -21,10 +21,12 @@ export interface RunOptions {
   plot?: boolean;
   /** Extra forms of the ADC codes, comma-separated: `c-header`, `json`. */
   codesAs?: string;
+  /** Write into a folder that holds other files, beside them (voltcast's own files are replaced). */
+  force?: boolean;
 }
 
 /** `voltcast run FILE`: simulate, stream `waveforms.csv`, write the reports, print a summary. */
-export function runCommand(file: string, options: RunOptions): void {
+export async function runCommand(file: string, options: RunOptions): Promise<void> {
   const { circuit, fileName, warnings } = readCircuitFile(file);
   for (const warning of warnings) console.error(warning);
   const outDir = options.out ?? defaultOutDir(fileName);
@@ -32,7 +34,7 @@ export function runCommand(file: string, options: RunOptions): void {
   const progress = new RunProgress(circuit.simulate.duration, !options.quiet);
   const startedAt = performance.now();
 
-  const { report, files } = writeOutputDir(outDir, (staging) => {
+  const { report, files } = await writeOutputDir(outDir, { force: options.force }, (staging) => {
     const csv = new WaveformCsv(join(staging, 'waveforms.csv'), circuit.recorded);
     const extremes = new ExtremesTracker(circuit.recorded);
     let run: CircuitRun;

@@ -15,9 +15,12 @@ export function writeEnvelopeCsv(path: string, result: Envelope): void {
   writeFileSync(path, lines.join('\n') + '\n');
 }
 
-/** `envelope-adc-NAME.csv`: `index,time,code.min,code.nominal,code.max`, one row per code. */
+/**
+ * `envelope-adc-NAME.csv`: `index,time,NAME.min,NAME.nominal,NAME.max`, one row per code. The
+ * columns carry the converter's name so that `voltcast compare` calls the signal by it.
+ */
 export function writeAdcEnvelopeCsv(path: string, adc: AdcEnvelope): void {
-  const lines = ['index,time,code.min,code.nominal,code.max'];
+  const lines = [['index', 'time', ...['min', 'nominal', 'max'].map((limit) => `${adc.name}.${limit}`)].join(',')];
   for (let i = 0; i < adc.index.length; i++) lines.push(`${adc.index[i]},${formatValue(adc.time[i])},${adc.min[i]},${adc.nominal[i]},${adc.max[i]}`);
   writeFileSync(path, lines.join('\n') + '\n');
 }

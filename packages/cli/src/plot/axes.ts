@@ -22,7 +22,9 @@ export function timeAxis(x: ScaleLinear<number, number>, top: number, bottom: nu
 /** Value axis left of a panel, with grid lines across it. */
 export function valueAxis(y: ScaleLinear<number, number>, left: number, right: number, unit: string): string {
   const parts: string[] = [];
-  for (const tick of y.ticks(5)) {
+  // Codes are whole numbers: a narrow range of codes must not get ticks at half codes.
+  const ticks = unit === '' ? y.ticks(5).filter(Number.isInteger) : y.ticks(5);
+  for (const tick of ticks) {
     const py = y(tick);
     parts.push(element('line', { x1: left, x2: right, y1: py, y2: py, stroke: gridColour }));
     parts.push(element('line', { x1: left - tickLength, x2: left, y1: py, y2: py, stroke: inkColour }));

@@ -19,7 +19,7 @@ export function drawSeries(series: Series, colour: string, x: ScaleLinear<number
         .y((i) => y(values[i]))
         .defined((i) => Number.isFinite(values[i]));
       if (series.kind === 'steps') path.curve(curveStepAfter);
-      return element('path', { ...tag, d: path(time.map((_, i) => i)) ?? '', fill: 'none', stroke: colour, 'stroke-width': series.kind === 'steps' ? 1.25 : 1.5, 'stroke-dasharray': series.kind === 'line' && series.dashed ? '5 3' : undefined, 'stroke-linejoin': 'round' });
+      return element('path', { ...tag, d: path(time.map((_, i) => i)) ?? '', fill: 'none', stroke: colour, 'stroke-width': series.kind === 'steps' ? 1.25 : 1.5, 'stroke-dasharray': series.dashed ? '5 3' : undefined, 'stroke-linejoin': 'round' });
     }
     case 'band': {
       // Thinned separately, the two edges may keep different times: walk the lower edge

@@ -1,7 +1,7 @@
 import { scaleLinear } from 'd3-scale';
 import { timeAxis, valueAxis } from './axes.ts';
 import { drawSeries } from './draw-series.ts';
-import { legend } from './legend.ts';
+import { layoutLegend, legend, legendRowHeight, titleCharWidth, type LegendLayout } from './legend.ts';
 import type { Figure, Panel, Series } from './series.ts';
 import { element, text } from './svg.ts';
 
@@ -16,13 +16,17 @@ const margin = { left: 78, right: 24, top: 72, between: 44, bottom: 48 };
  */
 export function renderFigure(figure: Figure): string {
   const panels = figure.panels;
-  const height = margin.top + panels.length * panelHeight + (panels.length - 1) * margin.between + margin.bottom;
   const [start, end] = timeSpan(panels);
   const x = scaleLinear().domain([start, end]).range([margin.left, width - margin.right]);
+  // Each panel's key sits above it: extra rows of key push the panel down.
+  let cursor = margin.top;
   const body = panels.map((panel, i) => {
-    const top = margin.top + i * (panelHeight + margin.between);
-    return drawPanel(panel, x, top, i === panels.length - 1);
+    const key = layoutLegend(panel.series, margin.left, width - margin.right, titleCharWidth * panel.title.length);
+    const top = cursor + (key.rows - 1) * legendRowHeight;
+    cursor = top + panelHeight + margin.between;
+    return drawPanel(panel, key, x, top, i === panels.length - 1);
   });
+  const height = cursor - margin.between + margin.bottom;
   const header = [
     text(margin.left, 22, figure.title, { 'font-size': 15, 'font-weight': 'bold', fill: '#222' }),
     ...(figure.subtitle ? [text(margin.left, 40, figure.subtitle, { 'font-size': 11, fill: '#555' })] : []),
@@ -36,13 +40,14 @@ export function renderFigure(figure: Figure): string {
   )}\n`;
 }
 
-function drawPanel(panel: Panel, x: ReturnType<typeof scaleLinear<number, number>>, top: number, last: boolean): string {
+function drawPanel(panel: Panel, key: LegendLayout, x: ReturnType<typeof scaleLinear<number, number>>, top: number, last: boolean): string {
   const bottom = top + panelHeight;
   const [low, high] = valueSpan(panel.series);
   const pad = (high - low) * 0.06 || Math.abs(high) * 0.1 || 1;
   const y = scaleLinear().domain([low - pad, high + pad]).range([bottom, top]).nice();
   const [left, right] = x.range();
   const clipId = `clip-${top}`;
+  const titleBaseline = top - 8 - (key.rows - 1) * legendRowHeight;
   return element(
     'g',
     { class: 'panel' },
@@ -50,9 +55,9 @@ function drawPanel(panel: Panel, x: ReturnType<typeof scaleLinear<number, number
     timeAxis(x, top, bottom, last),
     valueAxis(y, left, right, panel.unit),
     element('g', { 'clip-path': `url(#${clipId})` }, ...panel.series.map((s, i) => drawSeries(s, panel.colours[i], x, y))),
-    element('rect', { x: left, y: top, width: right - left, height: panelHeight, fill: 'none', stroke: '#999' }),
-    text(left, top - 8, panel.title, { 'font-size': 12, 'font-weight': 'bold', fill: '#333' }),
-    legend(panel.series, panel.colours, right, top + 6),
+    element('rect', { class: 'frame', x: left, y: top, width: right - left, height: panelHeight, fill: 'none', stroke: '#999' }),
+    text(left, titleBaseline, panel.title, { 'font-size': 12, 'font-weight': 'bold', fill: '#333' }),
+    legend(panel.series, panel.colours, key, titleBaseline),
   );
 }
 

@@ -5,7 +5,7 @@ export type Series =
   /** A shaded band between two curves (a tolerance envelope); `stepped` holds values until the next time (codes). */
   | { readonly kind: 'band'; readonly name: string; readonly time: ArrayLike<number>; readonly low: ArrayLike<number>; readonly high: ArrayLike<number>; readonly stepped?: boolean }
   /** Values held until the next sample (ADC codes). */
-  | { readonly kind: 'steps'; readonly name: string; readonly time: ArrayLike<number>; readonly values: ArrayLike<number> }
+  | { readonly kind: 'steps'; readonly name: string; readonly time: ArrayLike<number>; readonly values: ArrayLike<number>; readonly dashed?: boolean }
   /** Marked points (violations). */
   | { readonly kind: 'marks'; readonly name: string; readonly time: ArrayLike<number>; readonly values: ArrayLike<number> }
   /** Time intervals shaded across the whole panel (an amplifier held at a rail). */
@@ -14,7 +14,7 @@ export type Series =
 /** One stacked panel: its own y axis, the shared time axis. */
 export interface Panel {
   readonly title: string;
-  /** Unit of the y axis (`V`, or '' for codes). */
+  /** Unit of the y axis (`V`, or '' for codes, which are labelled as whole numbers). */
   readonly unit: string;
   readonly series: readonly Series[];
   /** Colour per series, by index in `series`; a band and its nominal line may share one. */

@@ -36,7 +36,7 @@ const CLAMP_OVERSHOOT = 1e-3;
 const G2 = 1e-3;
 
 /**
- * The macro-model (DESIGN.md): the differential input plus offset drives a transconductance
+ * The macro-model (docs/guide-opamp.md): the differential input plus offset drives a transconductance
  * stage whose current is limited to ±Imax by a tanh (Imax/C1 is the slew rate) into an
  * internal node with R1 ∥ C1 to ground (gm·R1 is the open-loop gain, gm/(2π·C1) the
  * gain-bandwidth). That node is clamped between the supplies less their headroom, so the
