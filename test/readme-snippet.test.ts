@@ -16,7 +16,7 @@ test("the README's library snippet runs, reading the file wave beside the circui
   expect(snippet).toContain("from '@voltcast/core'");
   const core = pathToFileURL(join(repoRoot, 'packages/core/src/index.ts')).href;
   const program = `${snippet.replace("'@voltcast/core'", `'${core}'`)}
-console.log(JSON.stringify({ rows: run.transient.time.length, column: run.transient.columns.get('probe')?.length, accepted: run.transient.stats.acceptedSteps }));
+console.log(JSON.stringify({ rows: run.transient.time.length, column: run.transient.columns.get('sensor')?.length, accepted: run.transient.stats.acceptedSteps }));
 `;
   const scratch = mkdtempSync(join(tmpdir(), 'voltcast-readme-'));
   try {
