@@ -29,7 +29,6 @@ describe('a folder of the user survives every command', () => {
     const project = projectFolder(context);
     const before = snapshot(project);
     for (const args of [
-      ['run', 'board.yaml', '--out', '.'],
       ['run', 'board.yaml', '--out', project, '--plot'],
       ['envelope', 'board.yaml', '--runs', '2', '--workers', '1', '--out', '.'],
     ]) {
