@@ -22,14 +22,19 @@ record: [n5]
 `;
 }
 
-/** An RC ladder of `sections` sections driven by a square wave. */
-export function rcLadder(sections: number, steps: number, step: number): string {
+/**
+ * An RC ladder of `sections` sections driven by a square wave: `sections` + 2 unknowns.
+ * `step` fixes the step; without it the step control chooses, and every square-wave edge
+ * costs new factorizations.
+ */
+export function rcLadder(sections: number, duration: number, step?: number): string {
   const lines = [`circuit: bench-rc-ladder-${sections}`, 'parts:', '  SRC: { voltage: { square: { low: 0, high: 1, frequency: 1k } }, between: [n0, gnd] }'];
   for (let i = 1; i <= sections; i++) {
     lines.push(`  R${i}: { resistor: 100, between: [n${i - 1}, n${i}] }`);
     lines.push(`  C${i}: { capacitor: 10n, between: [n${i}, gnd] }`);
   }
-  lines.push(`simulate: { duration: ${steps * step}, output-step: ${(steps * step) / 100}, fixed-step: ${step} }`);
+  const steps = step === undefined ? 'max-step: 10u' : `fixed-step: ${step}`;
+  lines.push(`simulate: { duration: ${duration}, output-step: ${duration / 100}, ${steps} }`);
   lines.push(`record: [n${sections}]`);
   return lines.join('\n');
 }

@@ -1,9 +1,10 @@
 import type { Device, StepInfo } from '../parts/device.ts';
-import { MnaSystem } from '../solver/mna.ts';
-import { LuSolver } from '../solver/lu.ts';
+import type { Assembly, Factorization } from '../solver/assembly.ts';
+import { DenseSystem } from '../solver/dense-system.ts';
+import { SparseSystem } from '../solver/sparse-system.ts';
 import { diagnoseSingular } from '../solver/diagnose.ts';
 import type { Topology } from '../solver/topology.ts';
-import type { RunStats } from './result.ts';
+import type { RunStats, SimulateOptions } from './result.ts';
 import { SimulationError } from './simulation-error.ts';
 
 /** Newton limits: iterations per solve, and the convergence test on every unknown. */
@@ -14,6 +15,20 @@ export interface NewtonSettings {
   current: number;
 }
 
+/** Storage of the matrix: chosen by size unless forced. */
+export type MatrixStorage = NonNullable<SimulateOptions['matrix']>;
+
+/**
+ * From this many unknowns on, the sparse matrix is the faster (`pnpm bench`, the matrix
+ * crossover case: an RC ladder solved both ways).
+ */
+export const SPARSE_FROM = 60;
+
+/** Matrix layers kept by the equations. */
+const STATIC = 0;
+const STEP = 1;
+const FACTORED = 2;
+
 /**
  * The circuit's equations at one step: assembles `G·x = b` from the devices and solves it,
  * with Newton-Raphson when some device is nonlinear. The matrix is kept in three layers so
@@ -23,20 +38,19 @@ export interface NewtonSettings {
  */
 export class Equations {
   readonly size: number;
-  private readonly mna: MnaSystem;
-  private lu: LuSolver;
+  /** Dense or sparse, whichever is faster at this size. */
+  readonly storage: 'dense' | 'sparse';
+  private readonly mna: Assembly;
+  private lu: Factorization;
   /**
    * For linear circuits, the factorization of the step before last, with its step size and
    * method: after each corner the method goes backward Euler → trapezoidal at an unchanged
    * step, and this spares refactoring for the way back.
    */
-  private spare: LuSolver;
+  private spare: Factorization | null;
   private spareH = NaN;
   private spareMethod = '';
   private readonly changesAtCorners: boolean;
-  private readonly staticMatrix: Float64Array;
-  private readonly stepMatrix: Float64Array;
-  private readonly factored: Float64Array;
   private readonly rhsBase: Float64Array;
   private readonly next: Float64Array;
   private readonly tolerance: Float64Array;
@@ -55,27 +69,26 @@ export class Equations {
     readonly topology: Topology,
     private readonly newton: NewtonSettings,
     private readonly stats: RunStats,
+    storage: MatrixStorage = 'auto',
   ) {
     const n = topology.size;
     this.size = n;
-    this.mna = new MnaSystem(n);
-    this.lu = new LuSolver(n);
+    this.storage = storage === 'auto' ? (n >= SPARSE_FROM ? 'sparse' : 'dense') : storage;
+    this.mna = this.storage === 'sparse' ? new SparseSystem(n) : new DenseSystem(n);
+    this.lu = this.mna.factorization();
     this.changesAtCorners = devices.some((d) => d.stampStep !== undefined && d.nextCorner !== undefined);
-    this.staticMatrix = new Float64Array(n * n);
-    this.stepMatrix = new Float64Array(n * n);
-    this.factored = new Float64Array(n * n);
     this.rhsBase = new Float64Array(n);
     this.next = new Float64Array(n);
     this.tolerance = Float64Array.from(topology.isCurrent, (c) => (c ? newton.current : newton.voltage));
     this.nonlinear = devices.filter((d) => d.stampNewton !== undefined);
-    this.spare = new LuSolver(this.nonlinear.length === 0 ? n : 0);
+    this.spare = this.nonlinear.length === 0 ? this.mna.factorization() : null;
     this.withRhs = devices.filter((d) => d.stampRhs !== undefined);
     this.withStep = devices.filter((d) => d.stampStep !== undefined);
     this.withAccept = devices.filter((d) => d.accept !== undefined);
     this.withCorners = devices.filter((d) => d.nextCorner !== undefined);
     this.withRegions = devices.filter((d) => d.region !== undefined);
     for (const d of devices) d.stampStatic?.(this.mna);
-    this.staticMatrix.set(this.mna.matrix);
+    this.mna.save(STATIC);
   }
 
   /**
@@ -94,7 +107,7 @@ export class Equations {
    */
   private swapSpare(step: StepInfo): void {
     let reuse = false;
-    if (this.nonlinear.length === 0 && this.factorValid) {
+    if (this.spare !== null && this.factorValid) {
       reuse = step.h === this.spareH && step.method === this.spareMethod;
       const kept = this.lu;
       this.lu = this.spare;
@@ -115,15 +128,16 @@ export class Equations {
   solve(step: StepInfo, x: Float64Array): boolean {
     const m = this.mna;
     if (step.h !== this.stepH || step.method !== this.stepMethod) {
-      m.matrix.set(this.staticMatrix);
+      m.load(STATIC);
       for (const d of this.withStep) d.stampStep!(m, step);
-      this.stepMatrix.set(m.matrix);
+      m.save(STEP);
       this.swapSpare(step);
     }
     m.b.fill(0);
     for (const d of this.withRhs) d.stampRhs!(m, step);
     if (this.nonlinear.length === 0) {
-      if (!this.factorValid) this.factor(this.stepMatrix, step);
+      // The matrix holds the step layer: nothing else stamps it in a linear circuit.
+      if (!this.factorValid) this.factor(step);
       this.lu.solve(m.b, x);
       this.stats.solves++;
       this.stats.newtonIterations++;
@@ -131,11 +145,11 @@ export class Equations {
     }
     this.rhsBase.set(m.b);
     for (let iteration = 1; iteration <= this.newton.maxIterations; iteration++) {
-      m.matrix.set(this.stepMatrix);
+      m.load(STEP);
       m.b.set(this.rhsBase);
       let limited = false;
       for (const d of this.nonlinear) if (d.stampNewton!(m, x, step)) limited = true;
-      if (!this.factorValid || !sameEntries(m.matrix, this.factored)) this.factor(m.matrix, step);
+      if (!this.factorValid || !m.equals(FACTORED)) this.factor(step);
       this.lu.solve(m.b, this.next);
       this.stats.solves++;
       this.stats.newtonIterations++;
@@ -194,22 +208,17 @@ export class Equations {
     return true;
   }
 
-  private factor(matrix: Float64Array, step: StepInfo): void {
-    const singular = this.lu.factor(matrix);
+  private factor(step: StepInfo): void {
+    const singular = this.lu.factor();
     this.stats.factorizations++;
     if (singular >= 0) {
       const cause = diagnoseSingular(this.devices, this.topology, singular);
       // The time travels in the error's `time` field (NaN for the operating point).
       throw new SimulationError(cause.message, step.method === 'dc' ? NaN : step.t, cause.nodes, cause.hint, cause.parts);
     }
-    this.factored.set(matrix);
+    this.mna.save(FACTORED);
     this.factorValid = true;
   }
-}
-
-function sameEntries(a: Float64Array, b: Float64Array): boolean {
-  for (let i = 0; i < a.length; i++) if (a[i] !== b[i]) return false;
-  return true;
 }
 
 function allFinite(x: Float64Array): boolean {

@@ -43,4 +43,9 @@ export interface SimulateOptions {
   onProgress?: (fraction: number) => void;
   /** When false, columns are not kept (use `onRow` to stream long runs). Default true. */
   keepColumns?: boolean;
+  /**
+   * Storage of the circuit matrix: `dense`, `sparse`, or `auto` (the default: dense for
+   * small circuits, sparse from a few dozen unknowns on). The waveforms agree to rounding.
+   */
+  matrix?: 'dense' | 'sparse' | 'auto';
 }

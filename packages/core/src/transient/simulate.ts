@@ -55,6 +55,7 @@ export function simulate(circuit: Circuit, options: SimulateOptions = {}): Trans
       current: settings.accuracy.amps,
     },
     stats,
+    options.matrix,
   );
   const n = equations.size;
   const duration = settings.duration;
