@@ -1,17 +1,15 @@
 import { describe, expect, it } from 'vitest';
-import { LineCounter, parseDocument } from 'yaml';
 import { readStimulus } from '../src/waves/index.ts';
 import { IssueSink, YamlValue } from '../src/reading/yaml-reader.ts';
+import { LineIndex, parseYamlTree } from '../src/reading/yaml-tree.ts';
 import type { ReadContext } from '../src/reading/reader.ts';
 import { quantities } from '../src/units/quantity.ts';
 import { formatIssue } from '../src/reading/issue.ts';
 
 /** Read a source value written as YAML, as a voltage source's `voltage:` would be. */
 function read(text: string, context: ReadContext = {}) {
-  const lines = new LineCounter();
-  const document = parseDocument(text, { lineCounter: lines });
-  const sink = new IssueSink(document, lines);
-  const wave = readStimulus(new YamlValue(sink, document.contents, ['voltage']), quantities.voltage, context);
+  const sink = new IssueSink(new LineIndex(text));
+  const wave = readStimulus(new YamlValue(sink, parseYamlTree(text), ['voltage']), quantities.voltage, context);
   return { wave, issues: sink.issues, messages: sink.issues.map((issue) => formatIssue(issue, 'w.yaml')) };
 }
 

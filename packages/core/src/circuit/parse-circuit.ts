@@ -1,9 +1,10 @@
-import { Document, LineCounter, parseDocument, type YAMLError } from 'yaml';
+import { LineCounter, parseDocument, type YAMLError } from 'yaml';
 import type { Accuracy, Circuit, SimulateSettings } from './circuit.ts';
 import { simulateDefaults } from './circuit.ts';
 import { CircuitError, type CircuitIssue } from '../reading/issue.ts';
 import type { MapReader, ReadContext, ValueReader } from '../reading/reader.ts';
 import { IssueSink, YamlValue } from '../reading/yaml-reader.ts';
+import { LineIndex, parseYamlTree, treeOf, type YamlNode } from '../reading/yaml-tree.ts';
 import { selectKind } from '../reading/select-kind.ts';
 import { readTolerances } from './read-tolerance.ts';
 import { checkConnections, nodesInOrder } from './connections.ts';
@@ -35,27 +36,41 @@ const manyRows = 1e7;
  * YAML itself is broken only the syntax errors are reported, since the rest would mislead.
  */
 export function readCircuit(text: string, options: ParseOptions = {}): ReadCircuitResult {
-  const lines = new LineCounter();
-  const document = parseDocument(text, { lineCounter: lines, prettyErrors: false, uniqueKeys: false });
-  const sink = new IssueSink(document, lines);
-  const syntax = (severity: 'error' | 'warning') => (problem: YAMLError) => {
-    const { line, col } = lines.linePos(problem.pos[0]);
-    sink.add({
-      severity,
-      message: `YAML: ${problem.message}`,
-      hint: 'check the indentation, colons and brackets here and on the line before',
-      path: [],
-      position: { line, column: col },
-    });
-  };
-  document.errors.forEach(syntax('error'));
-  document.warnings.forEach(syntax('warning'));
-  if (document.errors.length > 0) return { issues: sink.issues };
-  const result = readDocument(document, sink, options, { line: 1, column: 1 });
+  let tree: YamlNode;
+  try {
+    tree = parseYamlTree(text);
+  } catch (error) {
+    return { issues: syntaxIssues(text, error) };
+  }
+  const result = readDocument(tree, new IssueSink(new LineIndex(text)), options, { line: 1, column: 1 });
   // Every issue read from text has a position: list them top to bottom, as an editor would.
   const at = (issue: CircuitIssue) => (issue.position?.line ?? 0) * 1e6 + (issue.position?.column ?? 0);
   result.issues.sort((a, b) => at(a) - at(b));
   return result;
+}
+
+/**
+ * Issues for text that is not valid YAML. The yaml package reads broken text again for its
+ * messages, which name the construct and the place better; if it finds nothing wrong, the
+ * fast parser's own message is reported.
+ */
+function syntaxIssues(text: string, error: unknown): CircuitIssue[] {
+  const hint = 'check the indentation, colons and brackets here and on the line before';
+  const lines = new LineCounter();
+  const document = parseDocument(text, { lineCounter: lines, prettyErrors: false, uniqueKeys: false });
+  const issue = (problem: YAMLError): CircuitIssue => {
+    const { line, col } = lines.linePos(problem.pos[0]);
+    return { severity: 'error', message: `YAML: ${problem.message}`, hint, path: [], position: { line, column: col } };
+  };
+  if (document.errors.length > 0) return document.errors.map(issue);
+  const mark = (error as { mark?: { line: number; column: number }; reason?: string }) ?? {};
+  return [{
+    severity: 'error',
+    message: `YAML: ${mark.reason ?? String(error)}`,
+    hint,
+    path: [],
+    position: mark.mark ? { line: mark.mark.line + 1, column: mark.mark.column + 1 } : undefined,
+  }];
 }
 
 /** Like `readCircuit`, but throws a `CircuitError` carrying every issue when there is an error. */
@@ -72,14 +87,13 @@ export function parseCircuit(text: string, options: ParseOptions = {}): Circuit 
  * Throws a `CircuitError` when there is an error.
  */
 export function buildCircuit(description: object, options: ParseOptions = {}): Circuit {
-  const document = new Document(description);
-  const { circuit, issues } = readDocument(document, new IssueSink(document), options, undefined);
+  const { circuit, issues } = readDocument(treeOf(description), new IssueSink(), options, undefined);
   if (circuit === undefined) throw new CircuitError(issues, options.fileName);
   return circuit;
 }
 
-function readDocument(document: Document, sink: IssueSink, context: ReadContext, start: { line: number; column: number } | undefined): ReadCircuitResult {
-  const root = new YamlValue(sink, document.contents, [], start);
+function readDocument(tree: YamlNode, sink: IssueSink, context: ReadContext, start: { line: number; column: number } | undefined): ReadCircuitResult {
+  const root = new YamlValue(sink, tree, [], start);
   if (root.kind() !== 'map') {
     root.fail(root.kind() === 'null' ? 'the circuit is empty' : 'a circuit must be a map of keys', 'a circuit needs the keys circuit:, parts: and simulate:');
     return { issues: sink.issues };

@@ -1,7 +1,7 @@
-import { isAlias, isMap, isScalar, isSeq, type Document, type LineCounter } from 'yaml';
 import type { CircuitIssue, SourcePosition } from './issue.ts';
 import type { MapReader, NumberLimits, ValueReader } from './reader.ts';
 import { suggestion } from './suggest.ts';
+import type { LineIndex, YamlNode } from './yaml-tree.ts';
 import type { Quantity } from '../units/quantity.ts';
 import { parseQuantity } from '../units/si.ts';
 import { formatSI } from '../units/format.ts';
@@ -11,22 +11,12 @@ type Path = readonly (string | number)[];
 /** Collects the issues of one read and turns node offsets into line and column. */
 export class IssueSink {
   readonly issues: CircuitIssue[] = [];
-  constructor(
-    private readonly document: Document,
-    private readonly lines?: LineCounter,
-  ) {}
+  constructor(private readonly lines?: LineIndex) {}
 
-  /** Where a node starts; absent for documents built from objects, which have no text. */
-  positionOf(node: unknown): SourcePosition | undefined {
-    const range = (node as { range?: readonly number[] } | null)?.range;
-    if (range === undefined || this.lines === undefined) return undefined;
-    const { line, col } = this.lines.linePos(range[0]);
-    return { line, column: col };
-  }
-
-  /** Follow `*alias` to the node it names. */
-  resolve(node: unknown): unknown {
-    return isAlias(node) ? node.resolve(this.document) : node;
+  /** Where a node starts; absent for empty values and for documents built from objects, which have no text. */
+  positionOf(node: YamlNode | undefined): SourcePosition | undefined {
+    if (node === undefined || node.offset < 0 || this.lines === undefined) return undefined;
+    return this.lines.position(node.offset);
   }
 
   add(issue: CircuitIssue): void {
@@ -45,22 +35,19 @@ export class YamlValue implements ValueReader {
 
   constructor(
     protected readonly sink: IssueSink,
-    node: unknown,
+    /** The YAML node; undefined stands for a missing value. */
+    protected readonly yaml: YamlNode | undefined,
     readonly path: Path,
     /** Used when the node has no position of its own (an empty value: its key's position). */
     fallback?: SourcePosition,
   ) {
-    this.yaml = sink.resolve(node);
-    this.position = sink.positionOf(this.yaml) ?? fallback;
+    this.position = sink.positionOf(yaml) ?? fallback;
     // Everything under `parts.NAME` belongs to part NAME.
     if (path[0] === 'parts' && path.length >= 2) this.part = String(path[1]);
   }
-  /** The YAML node (or, in a document built from an object, possibly a raw value). */
-  protected readonly yaml: unknown;
-
   kind(): 'map' | 'list' | 'scalar' | 'null' {
-    if (isMap(this.yaml)) return 'map';
-    if (isSeq(this.yaml)) return 'list';
+    const kind = this.yaml?.kind;
+    if (kind === 'map' || kind === 'list') return kind;
     return this.scalar() === null ? 'null' : 'scalar';
   }
 
@@ -105,7 +92,7 @@ export class YamlValue implements ValueReader {
   }
 
   list(): ValueReader[] {
-    if (!isSeq(this.yaml)) {
+    if (this.yaml?.kind !== 'list') {
       this.fail(`expected a list like [a, b], found ${this.describe()}`);
       return [];
     }
@@ -114,8 +101,9 @@ export class YamlValue implements ValueReader {
 
   map(): MapReader {
     if (this.mapReader === undefined) {
-      if (!isMap(this.yaml)) this.fail(`expected a map of key: value pairs, found ${this.describe()}`);
-      this.mapReader = new YamlMap(this.sink, isMap(this.yaml) ? this.yaml : undefined, this.path, this.position);
+      const isMap = this.yaml?.kind === 'map';
+      if (!isMap) this.fail(`expected a map of key: value pairs, found ${this.describe()}`);
+      this.mapReader = new YamlMap(this.sink, isMap ? this.yaml : undefined, this.path, this.position);
     }
     return this.mapReader;
   }
@@ -134,16 +122,13 @@ export class YamlValue implements ValueReader {
 
   /** The scalar's value, `null` for an empty value, `undefined` for a map or list. */
   private scalar(): unknown {
-    if (this.yaml === null || this.yaml === undefined) return null;
-    if (isScalar(this.yaml)) return this.yaml.value ?? null;
-    if (isMap(this.yaml) || isSeq(this.yaml)) return undefined;
-    return this.yaml; // a raw JavaScript value of a document built from an object
+    if (this.yaml === undefined) return null;
+    return this.yaml.kind === 'scalar' ? this.yaml.value : undefined;
   }
 
-  /** The scalar as written (`007`, not 7), when the document has text. */
+  /** The scalar as written (`007`, not 7). */
   private source(): string {
-    const source = isScalar(this.yaml) ? this.yaml.source : undefined;
-    return typeof source === 'string' && source !== '' ? source : String(this.scalar());
+    return this.yaml?.kind === 'scalar' && this.yaml.source !== '' ? this.yaml.source : String(this.scalar());
   }
 
   /** What the value is, for "expected X, found Y". */
@@ -187,7 +172,7 @@ export class YamlValue implements ValueReader {
 interface Entry {
   readonly key: string;
   readonly keyPosition?: SourcePosition;
-  readonly value: unknown;
+  readonly value: YamlNode;
 }
 
 /** A map of the document. Keys asked for become known; `finish` reports the others. */
@@ -197,9 +182,9 @@ export class YamlMap extends YamlValue implements MapReader {
   private readonly known = new Set<string>();
   private finished = false;
 
-  constructor(sink: IssueSink, node: unknown, path: Path, fallback?: SourcePosition) {
+  constructor(sink: IssueSink, node: YamlNode | undefined, path: Path, fallback?: SourcePosition) {
     super(sink, node, path, fallback);
-    if (isMap(this.yaml)) for (const pair of this.yaml.items) this.addEntry(pair.key, pair.value);
+    if (this.yaml?.kind === 'map') for (const entry of this.yaml.entries) this.addEntry(entry.key, entry.value);
   }
 
   override map(): MapReader {
@@ -230,7 +215,7 @@ export class YamlMap extends YamlValue implements MapReader {
   need(key: string, hint?: string): ValueReader | undefined {
     const value = this.get(key);
     // A stand-in for a value that was not a map (already reported) lacks every key: say nothing more.
-    if (value === undefined && isMap(this.yaml)) this.report('error', `missing key '${key}'`, hint, [...this.path, key]);
+    if (value === undefined && this.yaml?.kind === 'map') this.report('error', `missing key '${key}'`, hint, [...this.path, key]);
     return value;
   }
 
@@ -262,10 +247,9 @@ export class YamlMap extends YamlValue implements MapReader {
     }
   }
 
-  private addEntry(keyNode: unknown, value: unknown): void {
-    const resolved = this.sink.resolve(keyNode);
-    const keyPosition = this.sink.positionOf(resolved) ?? this.position;
-    const raw = isScalar(resolved) ? resolved.value : resolved;
+  private addEntry(keyNode: YamlNode, value: YamlNode): void {
+    const keyPosition = this.sink.positionOf(keyNode) ?? this.position;
+    const raw = keyNode.kind === 'scalar' ? keyNode.value : keyNode;
     if (typeof raw !== 'string' && typeof raw !== 'number') {
       this.report('error', 'a key must be a plain word', 'write `name: value`', this.path, keyPosition);
       return;
