@@ -4,6 +4,8 @@
 import { parseCircuit, simulate, type SimulateOptions } from '@voltcast/core';
 import { differentiatorIntoRails, linearNetwork, rcLadder } from './cases.ts';
 import { bareSolveLoop } from './bare-loop.ts';
+// An internal constant, printed beside the measurements that chose it.
+import { SPARSE_FROM } from '../packages/core/src/transient/equations.ts';
 
 interface Timed {
   seconds: number;
@@ -12,13 +14,18 @@ interface Timed {
   newtonPerStep: number;
 }
 
-function run(text: string, matrix: SimulateOptions['matrix'] = 'auto'): Timed {
+/** Simulate `text` (parsed first, not timed); the fastest of `repeats` runs. */
+function run(text: string, matrix: SimulateOptions['matrix'] = 'auto', repeats = 1): Timed {
   const circuit = parseCircuit(text, { fileName: 'bench.yaml' });
-  const start = performance.now();
-  const result = simulate(circuit, { keepColumns: false, matrix });
-  const seconds = (performance.now() - start) / 1000;
-  const s = result.stats;
-  return { seconds, steps: s.acceptedSteps, factorizations: s.factorizations, newtonPerStep: s.newtonIterations / s.acceptedSteps };
+  let best: Timed | undefined;
+  for (let r = 0; r < repeats; r++) {
+    const start = performance.now();
+    const result = simulate(circuit, { keepColumns: false, matrix });
+    const seconds = (performance.now() - start) / 1000;
+    const s = result.stats;
+    if (best === undefined || seconds < best.seconds) best = { seconds, steps: s.acceptedSteps, factorizations: s.factorizations, newtonPerStep: s.newtonIterations / s.acceptedSteps };
+  }
+  return best!;
 }
 
 function target(what: string, measured: string, goal: string, met: boolean): void {
@@ -55,13 +62,15 @@ const sections: { title: string; run(): void }[] = [
     title: 'ladder: per-step cost against size (fixed steps)',
     run() {
       const costs = new Map<number, number>();
+      // Warm the code up first, so that the smallest size does not pay for compilation.
+      run(rcLadder(300, 200e-7, 1e-7));
       for (const [n, steps] of [[300, 4000], [1000, 2000], [3000, 1000], [10000, 400]] as const) {
         const start = performance.now();
         const text = rcLadder(n, steps * 1e-7, 1e-7);
         const t = run(text);
         const total = (performance.now() - start) / 1000;
         costs.set(n, perStep(t));
-        console.log(`  ${String(n).padStart(6)} sections: ${perStep(t).toFixed(4)} ms per step over ${t.steps} steps, ${t.factorizations} LU, ${total.toFixed(2)} s with text, parse and setup`);
+        console.log(`  ${String(n).padStart(6)} sections: ${perStep(t).toFixed(4)} ms per step (setup included) over ${t.steps} steps, ${t.factorizations} LU; ${total.toFixed(2)} s with writing, parsing and setup`);
         if (n === 10000) {
           const rss = process.resourceUsage().maxRSS * 1024;
           target('10,000 sections, 400 steps including setup', `${total.toFixed(2)} s`, '≤ 30 s', total <= 30);
@@ -73,13 +82,14 @@ const sections: { title: string; run(): void }[] = [
     },
   },
   {
-    title: 'matrix: dense against sparse by size (RC ladder, step control, 2 ms)',
+    title: 'matrix: dense against sparse by size (RC ladder, step control, 2 ms; best of 3)',
     run() {
+      console.log(`  the automatic choice is sparse from ${SPARSE_FROM} unknowns on`);
       console.log('  ' + 'unknowns'.padStart(8), 'dense µs/step'.padStart(14), 'sparse µs/step'.padStart(15), 'sparse/dense'.padStart(13), 'LU'.padStart(6));
-      for (const n of [5, 10, 20, 40, 60, 80, 120, 200]) {
+      for (const n of [4, 8, 12, 16, 24, 32, 48, 64, 96, 128]) {
         const text = rcLadder(n, 2e-3);
-        const dense = run(text, 'dense');
-        const sparse = run(text, 'sparse');
+        const dense = run(text, 'dense', 3);
+        const sparse = run(text, 'sparse', 3);
         console.log(
           '  ' + String(n + 2).padStart(8),
           ((perStep(dense) * 1e3).toFixed(2)).padStart(14),
@@ -106,8 +116,15 @@ const sections: { title: string; run(): void }[] = [
     title: 'small circuit against a bare loop',
     run() {
       const steps = 1_000_000;
-      const t = run(rcLadder(6, steps * 1e-8, 1e-8));
-      const bare = bareSolveLoop(8, steps);
+      const text = rcLadder(6, steps * 1e-8, 1e-8);
+      // Alternate the two, best of three each: a busy machine slows both alike.
+      let t = run(text);
+      let bare = bareSolveLoop(8, steps);
+      for (let r = 0; r < 2; r++) {
+        const again = run(text);
+        if (again.seconds < t.seconds) t = again;
+        bare = Math.min(bare, bareSolveLoop(8, steps));
+      }
       const ratio = (t.seconds / t.steps) / (bare / steps);
       console.log(`  6-section RC ladder, fixed steps: ${Math.round(t.steps / t.seconds).toLocaleString('en-US')} steps/s; bare loop (dense triangular solves and a right-hand side, 8 unknowns): ${Math.round(steps / bare).toLocaleString('en-US')} steps/s`);
       target('cost per step against the bare loop', `${ratio.toFixed(2)}×`, '≤ 3×', ratio <= 3);
