@@ -39,7 +39,6 @@ const FACTORED = 2;
 export class Equations {
   readonly size: number;
   /** Dense or sparse, whichever is faster at this size. */
-  readonly storage: 'dense' | 'sparse';
   private readonly mna: Assembly;
   private lu: Factorization;
   /**
@@ -73,8 +72,8 @@ export class Equations {
   ) {
     const n = topology.size;
     this.size = n;
-    this.storage = storage === 'auto' ? (n >= SPARSE_FROM ? 'sparse' : 'dense') : storage;
-    this.mna = this.storage === 'sparse' ? new SparseSystem(n) : new DenseSystem(n);
+    const sparse = storage === 'auto' ? n >= SPARSE_FROM : storage === 'sparse';
+    this.mna = sparse ? new SparseSystem(n) : new DenseSystem(n);
     this.lu = this.mna.factorization();
     this.changesAtCorners = devices.some((d) => d.stampStep !== undefined && d.nextCorner !== undefined);
     this.rhsBase = new Float64Array(n);
