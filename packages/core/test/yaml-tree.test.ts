@@ -1,7 +1,7 @@
 import { readFileSync, readdirSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
 import { isMap, isScalar, isSeq, parseDocument } from 'yaml';
-import { parseYamlTree, type YamlNode } from '../src/circuit/yaml-tree.ts';
+import { parseYamlTree, type YamlNode } from '../src/reading/yaml-tree.ts';
 
 const fixtures = new URL('../../../fixtures/', import.meta.url);
 

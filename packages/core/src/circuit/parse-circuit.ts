@@ -1,10 +1,10 @@
-import { LineCounter, parseDocument, type YAMLError } from 'yaml';
 import type { Accuracy, Circuit, SimulateSettings } from './circuit.ts';
 import { simulateDefaults } from './circuit.ts';
 import { CircuitError, type CircuitIssue } from '../reading/issue.ts';
 import type { MapReader, ReadContext, ValueReader } from '../reading/reader.ts';
 import { IssueSink, YamlValue } from '../reading/yaml-reader.ts';
 import { LineIndex, parseYamlTree, treeOf, type YamlNode } from '../reading/yaml-tree.ts';
+import { syntaxIssues } from '../reading/yaml-syntax.ts';
 import { selectKind } from '../reading/select-kind.ts';
 import { readTolerances } from './read-tolerance.ts';
 import { checkConnections, nodesInOrder } from './connections.ts';
@@ -47,30 +47,6 @@ export function readCircuit(text: string, options: ParseOptions = {}): ReadCircu
   const at = (issue: CircuitIssue) => (issue.position?.line ?? 0) * 1e6 + (issue.position?.column ?? 0);
   result.issues.sort((a, b) => at(a) - at(b));
   return result;
-}
-
-/**
- * Issues for text that is not valid YAML. The yaml package reads broken text again for its
- * messages, which name the construct and the place better; if it finds nothing wrong, the
- * fast parser's own message is reported.
- */
-function syntaxIssues(text: string, error: unknown): CircuitIssue[] {
-  const hint = 'check the indentation, colons and brackets here and on the line before';
-  const lines = new LineCounter();
-  const document = parseDocument(text, { lineCounter: lines, prettyErrors: false, uniqueKeys: false });
-  const issue = (problem: YAMLError): CircuitIssue => {
-    const { line, col } = lines.linePos(problem.pos[0]);
-    return { severity: 'error', message: `YAML: ${problem.message}`, hint, path: [], position: { line, column: col } };
-  };
-  if (document.errors.length > 0) return document.errors.map(issue);
-  const mark = (error as { mark?: { line: number; column: number }; reason?: string }) ?? {};
-  return [{
-    severity: 'error',
-    message: `YAML: ${mark.reason ?? String(error)}`,
-    hint,
-    path: [],
-    position: mark.mark ? { line: mark.mark.line + 1, column: mark.mark.column + 1 } : undefined,
-  }];
 }
 
 /** Like `readCircuit`, but throws a `CircuitError` carrying every issue when there is an error. */

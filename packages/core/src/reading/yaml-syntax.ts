@@ -1,0 +1,26 @@
+import { LineCounter, parseDocument, type YAMLError } from 'yaml';
+import type { CircuitIssue } from './issue.ts';
+
+/**
+ * Issues for text that is not valid YAML. The yaml package reads broken text again for its
+ * messages, which name the construct and the place better; if it finds nothing wrong, the
+ * fast parser's own message is reported.
+ */
+export function syntaxIssues(text: string, error: unknown): CircuitIssue[] {
+  const hint = 'check the indentation, colons and brackets here and on the line before';
+  const lines = new LineCounter();
+  const document = parseDocument(text, { lineCounter: lines, prettyErrors: false, uniqueKeys: false });
+  const issue = (problem: YAMLError): CircuitIssue => {
+    const { line, col } = lines.linePos(problem.pos[0]);
+    return { severity: 'error', message: `YAML: ${problem.message}`, hint, path: [], position: { line, column: col } };
+  };
+  if (document.errors.length > 0) return document.errors.map(issue);
+  const mark = (error as { mark?: { line: number; column: number }; reason?: string }) ?? {};
+  return [{
+    severity: 'error',
+    message: `YAML: ${mark.reason ?? String(error)}`,
+    hint,
+    path: [],
+    position: mark.mark ? { line: mark.mark.line + 1, column: mark.mark.column + 1 } : undefined,
+  }];
+}
