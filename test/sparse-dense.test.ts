@@ -48,7 +48,7 @@ describe('a singular circuit is still diagnosed by name with sparse matrices', (
     throw new Error('the run did not fail');
   }
 
-  it('a node with no DC path to ground', () => {
+  it('a floating node (no conducting path to ground at DC)', () => {
     const e = failure(`
 circuit: floating
 parts:
@@ -57,7 +57,7 @@ parts:
   C2: { capacitor: 1u, between: [mid, gnd] }
 simulate: { duration: 1m }
 `);
-    expect(e.message).toBe('node mid has no DC path to gnd');
+    expect(e.message).toBe('node mid floats: nothing that conducts at DC (resistor, source, inductor) joins it to gnd, so its steady voltage is undefined (only C1 and C2 touch it)');
     expect(e.nodes).toEqual(['mid']);
     expect(e.parts).toEqual(['C1', 'C2']);
   });
@@ -67,7 +67,7 @@ simulate: { duration: 1m }
     const e = failure(text);
     // n51..n100 hang from n50 through a capacitor: every one of them floats at DC.
     expect(e.nodes).toEqual(Array.from({ length: 50 }, (_, i) => `n${51 + i}`));
-    expect(e.message).toContain('have no DC path to gnd');
+    expect(e.message).toContain('float: nothing that conducts at DC');
   });
 
   it('a loop of a source and an inductor', () => {

@@ -1,6 +1,15 @@
 import type { Factorization } from './assembly.ts';
 import { minimumDegreeOrder } from './minimum-degree.ts';
-import type { SparseSystem } from './sparse-system.ts';
+import type { SparsePattern } from './sparse-pattern.ts';
+
+/** The matrix a sparse LU factors: entries in a pattern's slots (the sparse system). */
+export interface SparseMatrix {
+  readonly size: number;
+  readonly pattern: SparsePattern;
+  readonly values: Float64Array;
+  /** Merge entries stamped outside the pattern. */
+  settle(): void;
+}
 
 /** A candidate pivot on the diagonal is taken if it is at least this fraction of the column's largest. */
 const DIAGONAL_PREFERENCE = 0.1;
@@ -48,7 +57,7 @@ export class SparseLu implements Factorization {
   private readonly next: Int32Array;
   private readonly mark: Int32Array;
 
-  constructor(private readonly system: SparseSystem) {
+  constructor(private readonly system: SparseMatrix) {
     const n = system.size;
     this.n = n;
     this.rowStep = new Int32Array(n);
