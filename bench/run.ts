@@ -36,6 +36,26 @@ const perStep = (t: Timed) => (t.seconds / t.steps) * 1e3;
 const mb = (bytes: number) => `${Math.round(bytes / 2 ** 20)} MB`;
 
 const sections: { title: string; run(): void }[] = [
+  // First, while the process has run no other circuit: later ones make the engine's calls
+  // to devices polymorphic, which a program that runs one kind of circuit does not pay.
+  {
+    title: 'small circuit against a bare loop',
+    run() {
+      const steps = 1_000_000;
+      const text = rcLadder(6, steps * 1e-8, 1e-8);
+      // Alternate the two, best of three each: a busy machine slows both alike.
+      let t = run(text);
+      let bare = bareSolveLoop(8, steps);
+      for (let r = 0; r < 2; r++) {
+        const again = run(text);
+        if (again.seconds < t.seconds) t = again;
+        bare = Math.min(bare, bareSolveLoop(8, steps));
+      }
+      const ratio = (t.seconds / t.steps) / (bare / steps);
+      console.log(`  6-section RC ladder, fixed steps: ${Math.round(t.steps / t.seconds).toLocaleString('en-US')} steps/s; bare loop (dense triangular solves and a right-hand side, 8 unknowns): ${Math.round(steps / bare).toLocaleString('en-US')} steps/s`);
+      target('cost per step against the bare loop', `${ratio.toFixed(2)}×`, '≤ 3×', ratio <= 3);
+    },
+  },
   {
     title: 'steps per second',
     run() {
@@ -86,7 +106,7 @@ const sections: { title: string; run(): void }[] = [
     run() {
       console.log(`  the automatic choice is sparse from ${SPARSE_FROM} unknowns on`);
       console.log('  ' + 'unknowns'.padStart(8), 'dense µs/step'.padStart(14), 'sparse µs/step'.padStart(15), 'sparse/dense'.padStart(13), 'LU'.padStart(6));
-      for (const n of [4, 8, 12, 16, 24, 32, 48, 64, 96, 128]) {
+      for (const n of [4, 8, 12, 16, 22, 30, 62, 126]) {
         const text = rcLadder(n, 2e-3);
         const dense = run(text, 'dense', 3);
         const sparse = run(text, 'sparse', 3);
@@ -113,24 +133,6 @@ const sections: { title: string; run(): void }[] = [
       }
       console.log(`  ${parts} parts, ${Math.round(text.length / 1024)} KiB of text`);
       target('parse 10,001 parts', `${seconds.toFixed(3)} s`, '≤ 0.5 s', seconds <= 0.5);
-    },
-  },
-  {
-    title: 'small circuit against a bare loop',
-    run() {
-      const steps = 1_000_000;
-      const text = rcLadder(6, steps * 1e-8, 1e-8);
-      // Alternate the two, best of three each: a busy machine slows both alike.
-      let t = run(text);
-      let bare = bareSolveLoop(8, steps);
-      for (let r = 0; r < 2; r++) {
-        const again = run(text);
-        if (again.seconds < t.seconds) t = again;
-        bare = Math.min(bare, bareSolveLoop(8, steps));
-      }
-      const ratio = (t.seconds / t.steps) / (bare / steps);
-      console.log(`  6-section RC ladder, fixed steps: ${Math.round(t.steps / t.seconds).toLocaleString('en-US')} steps/s; bare loop (dense triangular solves and a right-hand side, 8 unknowns): ${Math.round(steps / bare).toLocaleString('en-US')} steps/s`);
-      target('cost per step against the bare loop', `${ratio.toFixed(2)}×`, '≤ 3×', ratio <= 3);
     },
   },
 ];

@@ -19,10 +19,11 @@ export interface NewtonSettings {
 export type MatrixStorage = NonNullable<SimulateOptions['matrix']>;
 
 /**
- * From this many unknowns on, the sparse matrix is the faster (`pnpm bench`, the matrix
- * crossover case: an RC ladder solved both ways).
+ * From this many unknowns on, the sparse matrix is the faster: `pnpm bench matrix` solves an
+ * RC ladder both ways, and sparse wins from 14 to 18 unknowns on (dense is ahead at 6, level
+ * at 10). Circuits as small as the fixtures (up to a dozen unknowns) stay dense.
  */
-export const SPARSE_FROM = 60;
+export const SPARSE_FROM = 16;
 
 /** Matrix layers kept by the equations. */
 const STATIC = 0;
