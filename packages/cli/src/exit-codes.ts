@@ -32,7 +32,7 @@ export function describeFailure(error: unknown): { message: string; exitCode: nu
 }
 
 function describeSimulationError(error: SimulationError): string {
-  const when = Number.isNaN(error.time) ? 'at the DC operating point' : `at t = ${formatSI(error.time, 's')}`;
+  const when = Number.isFinite(error.frequency) ? `at f = ${formatSI(error.frequency, 'Hz')}` : Number.isNaN(error.time) ? 'at the DC operating point' : `at t = ${formatSI(error.time, 's')}`;
   const lines = [`simulation failed ${when}: ${error.message}`];
   if (error.nodes.length > 0) lines.push(`  nodes: ${error.nodes.join(', ')}`);
   if (error.parts.length > 0) lines.push(`  parts: ${error.parts.join(', ')}`);

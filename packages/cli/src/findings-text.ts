@@ -126,7 +126,7 @@ function align(rows: readonly (readonly string[])[]): string[] {
 }
 
 /** Break `text` at spaces into lines of at most `width` characters, each after `indent`. */
-function wrap(text: string, width: number, indent: string): string[] {
+export function wrap(text: string, width: number, indent: string): string[] {
   const lines: string[] = [];
   let line = '';
   for (const word of text.split(' ')) {

@@ -4,6 +4,7 @@ import { runCommand, type RunOptions } from './commands/run.ts';
 import { checkCommand } from './commands/check.ts';
 import { envelopeCommand, type EnvelopeCommandOptions } from './commands/envelope.ts';
 import { compareCommand, type CompareCommandOptions } from './commands/compare.ts';
+import { responseCommand, type ResponseCommandOptions } from './commands/response.ts';
 
 const examples = `
 Examples:
@@ -13,6 +14,8 @@ Examples:
       simulate; writes out/supply-ringing/{waveforms.csv,report.json,report.txt}
   voltcast run board.yaml --out results/board-a --quiet
       write elsewhere and print nothing but errors
+  voltcast response fixtures/differentiator-plain.yaml --plot
+      gain, phase and loop margins; writes out/differentiator-plain-response/response.{csv,json,txt}
   voltcast envelope fixtures/envelope-rc-filter.yaml --runs 500 --seed 7 --corners --plot
       tolerance envelope; writes out/envelope-rc-filter-envelope/envelope.csv
   voltcast compare capture.csv out/board-envelope/envelope.csv --signal adc --shift auto
@@ -42,6 +45,17 @@ export function program(setOutcome: (code: number) => void): Command {
     .option('--codes-as <formats>', "also write each ADC's codes as c-header and/or json (comma-separated), beside adc-NAME.csv")
     .option('--force', "write into a folder that holds other files: voltcast's own files are replaced, every other file is left in place")
     .action((file: string, options: RunOptions) => runCommand(file, options));
+
+  root
+    .command('response')
+    .description('frequency response and loop stability: response.csv, response.json and response.txt')
+    .argument('<file>', 'circuit file (YAML) with a response: section')
+    .option('-o, --out <dir>', 'output folder (default: out/<file name>-response)')
+    .option('--plot', 'also write plot.svg: gain and phase against log frequency, open-loop gain and crossover')
+    .option('--phase-margin <degrees>', 'phase margin the hints aim for', '60')
+    .option('-q, --quiet', 'no summary')
+    .option('--force', "write into a folder that holds other files: voltcast's own files are replaced, every other file is left in place")
+    .action((file: string, options: ResponseCommandOptions) => responseCommand(file, options));
 
   root
     .command('envelope')

@@ -39,6 +39,6 @@ export function formatValue(value: number): string {
 }
 
 /** Quote a header field when it holds a comma, quote or line break (RFC 4180). */
-function csvField(text: string): string {
+export function csvField(text: string): string {
   return /[",\r\n]/.test(text) ? `"${text.replace(/"/g, '""')}"` : text;
 }

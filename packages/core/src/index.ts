@@ -1,10 +1,12 @@
 /**
  * voltcast core: circuit files, modified nodal analysis, trapezoidal transient analysis,
- * op-amp macro-model and ADC prediction. No file system or process access: runs in Node,
- * a worker or a browser. The host supplies file contents through `readFile` callbacks.
+ * frequency response and loop stability, op-amp macro-model and ADC prediction. No file
+ * system or process access: runs in Node, a worker or a browser. The host supplies file
+ * contents through `readFile` callbacks.
  *
- * This is the whole public surface: reading a circuit, running it, what a run returns,
- * envelopes and compare, and the protocols a new part kind or wave implements.
+ * This is the whole public surface: reading a circuit, running it, what a run returns, its
+ * frequency response, envelopes and compare, and the protocols a new part kind or wave
+ * implements.
  *
  * @packageDocumentation
  */
@@ -37,6 +39,13 @@ export type { RingingFinding, RingingOptions, RingingEvent, ReportWarning } from
 export type { AdcReadout } from './analysis/adc/adc-readout.ts';
 export type { AdcReport, ClippedSamples, CodeError, TimeInterval } from './analysis/adc/adc-report.ts';
 
+// Frequency response and loop stability, linearized at the t = 0 operating point.
+export { frequencyResponse } from './analysis/response/frequency-response.ts';
+export type { FrequencyResponse, ResponseOptions, LoopFinding, ResponseWarning } from './analysis/response/types.ts';
+export type { NodeResponse, LoopResponse, ResponsePeak, AmplifierState } from './small-signal/types.ts';
+export type { SmallSignalStats } from './small-signal/linearized-circuit.ts';
+export type { ResponseSettings } from './circuit/circuit.ts';
+
 // Tolerance envelopes and comparing captures against them.
 export { envelope, envelopePlan, runVariants, assembleEnvelope } from './analysis/envelope/envelope.ts';
 export type { Envelope, AdcEnvelope, EnvelopeOptions, EnvelopePlan } from './analysis/envelope/envelope.ts';
@@ -53,7 +62,7 @@ export type { OpampParameters, OpampPresetName } from './parts/opamp-presets.ts'
 
 // The protocols a part kind or a wave implements (see DEVELOPERS.md), and the built-in ones.
 export { partKinds } from './parts/index.ts';
-export type { PartKind, PartSpecBase, PinRef, Device, Binder, Mna, StepInfo, Method, Link } from './parts/index.ts';
+export type { PartKind, PartSpecBase, PinRef, Device, Binder, Mna, ComplexMna, GainStage, StepInfo, Method, Link } from './parts/index.ts';
 export type { TolerableValue } from './parts/tolerance.ts';
 export { waveKinds } from './waves/index.ts';
 export type { Wave, WaveKind } from './waves/wave.ts';

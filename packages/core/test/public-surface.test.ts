@@ -27,13 +27,16 @@ describe('the public surface of @voltcast/core', () => {
         'runCircuit', 'CircuitRun', 'RunOptions', 'Findings', 'FindingsOptions', 'FindingsStats', 'Hint',
         'SaturationInterval', 'SlewInterval', 'CurrentLimitInterval', 'Interval', 'SaturationOptions',
         'RingingFinding', 'RingingOptions', 'RingingEvent', 'ReportWarning', 'AdcReadout', 'AdcReport', 'ClippedSamples', 'CodeError', 'TimeInterval',
+        // frequency response
+        'frequencyResponse', 'FrequencyResponse', 'ResponseOptions', 'LoopFinding', 'ResponseWarning', 'NodeResponse', 'LoopResponse', 'ResponsePeak',
+        'AmplifierState', 'SmallSignalStats', 'ResponseSettings',
         // envelopes and compare
         'envelope', 'envelopePlan', 'runVariants', 'assembleEnvelope', 'Envelope', 'AdcEnvelope', 'EnvelopeOptions', 'EnvelopePlan', 'ToleranceSlot',
         'mergeBounds', 'EnvelopeBounds', 'compare', 'Trace', 'EnvelopeTrace', 'CompareOptions', 'Comparison', 'Violation', 'Tolerance', 'Distribution',
         // op-amp classes
         'opampPresets', 'opampPresetNames', 'OpampParameters', 'OpampPresetName',
         // extension protocols
-        'partKinds', 'PartKind', 'PartSpecBase', 'PinRef', 'Device', 'Binder', 'Mna', 'StepInfo', 'Method', 'Link', 'TolerableValue',
+        'partKinds', 'PartKind', 'PartSpecBase', 'PinRef', 'Device', 'Binder', 'Mna', 'ComplexMna', 'GainStage', 'StepInfo', 'Method', 'Link', 'TolerableValue',
         'waveKinds', 'Wave', 'WaveKind', 'ValueReader', 'MapReader', 'ReadContext', 'NumberLimits',
       ].sort(),
     );

@@ -1,22 +1,31 @@
-import type { ScaleLinear } from 'd3-scale';
+import type { ScaleContinuousNumeric, ScaleLinear } from 'd3-scale';
 import { siLabel } from './si-format.ts';
 import { element, text } from './svg.ts';
 
 const tickLength = 5;
 const gridColour = '#e3e3e3';
+const minorGridColour = '#f1f1f1';
 const inkColour = '#333333';
 
-/** Time axis under a panel, with grid lines up through it. */
-export function timeAxis(x: ScaleLinear<number, number>, top: number, bottom: number, label: boolean): string {
+/**
+ * The shared abscissa under a panel, with grid lines up through it: time on a linear scale,
+ * or frequency on a log scale (a grid line at every 1..9 of each decade, labels at the
+ * powers of ten).
+ */
+export function abscissaAxis(x: ScaleContinuousNumeric<number, number>, axis: 'time' | 'frequency', top: number, bottom: number, label: boolean): string {
   const parts: string[] = [];
-  for (const tick of x.ticks(8)) {
+  const ticks = axis === 'time' ? x.ticks(8) : x.ticks();
+  const decades = axis === 'frequency' && Math.log10(x.domain()[1] / x.domain()[0]) > 1;
+  for (const tick of ticks) {
     const px = x(tick);
-    parts.push(element('line', { x1: px, x2: px, y1: top, y2: bottom, stroke: gridColour }));
+    const labelled = !decades || Math.abs(Math.log10(tick) - Math.round(Math.log10(tick))) < 1e-9;
+    parts.push(element('line', { x1: px, x2: px, y1: top, y2: bottom, stroke: labelled ? gridColour : minorGridColour }));
+    if (!labelled) continue;
     parts.push(element('line', { x1: px, x2: px, y1: bottom, y2: bottom + tickLength, stroke: inkColour }));
-    parts.push(text(px, bottom + tickLength + 12, siLabel(tick, 's'), { 'text-anchor': 'middle' }));
+    parts.push(text(px, bottom + tickLength + 12, siLabel(tick, axis === 'time' ? 's' : 'Hz'), { 'text-anchor': 'middle' }));
   }
-  if (label) parts.push(text((x.range()[0] + x.range()[1]) / 2, bottom + 38, 'time', { 'text-anchor': 'middle', fill: '#666' }));
-  return element('g', { class: 'axis time', 'font-size': 11, fill: inkColour }, ...parts);
+  if (label) parts.push(text((x.range()[0] + x.range()[1]) / 2, bottom + 38, axis, { 'text-anchor': 'middle', fill: '#666' }));
+  return element('g', { class: `axis ${axis}`, 'font-size': 11, fill: inkColour }, ...parts);
 }
 
 /** Value axis left of a panel, with grid lines across it. */

@@ -14,16 +14,16 @@ export const circledViolations = 20;
 export function compareFigure(name: string, kind: 'voltage' | 'code', measured: Trace, limits: EnvelopeTrace, verdict: Comparison, files: string): Figure {
   const shifted = Float64Array.from(measured.time as ArrayLike<number>, (t) => t - verdict.shift);
   const series: Series[] = [
-    { kind: 'band', name: 'expected min..max', time: limits.time, low: limits.min, high: limits.max, stepped: kind === 'code' },
-    { kind: kind === 'code' ? 'steps' : 'line', name: 'expected nominal', time: limits.time, values: limits.nominal, dashed: true },
-    { kind: kind === 'code' ? 'steps' : 'line', name: 'measured', time: shifted, values: measured.values },
+    { kind: 'band', name: 'expected min..max', x: limits.time, low: limits.min, high: limits.max, stepped: kind === 'code' },
+    { kind: kind === 'code' ? 'steps' : 'line', name: 'expected nominal', x: limits.time, values: limits.nominal, dashed: true },
+    { kind: kind === 'code' ? 'steps' : 'line', name: 'measured', x: shifted, values: measured.values },
   ];
   const colours = [colour(0), colour(0), colour(1)];
   const { violations } = verdict;
   const circled = violations.slice(0, circledViolations);
   if (circled.length > 0) {
     const first = circled.length === violations.length ? `violations (${violations.length})` : `first ${circled.length} violations`;
-    series.push({ kind: 'marks', name: first, time: circled.map((v) => v.envelopeTime), values: circled.map((v) => v.value) });
+    series.push({ kind: 'marks', name: first, x: circled.map((v) => v.envelopeTime), values: circled.map((v) => v.value) });
     colours.push(violationColour);
   }
   if (violations.length > circled.length) {

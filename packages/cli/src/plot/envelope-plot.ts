@@ -8,8 +8,8 @@ export function envelopeFigure(result: Envelope, circuitName: string, fileName: 
     title: node,
     unit: 'V',
     series: [
-      { kind: 'band', name: `${node} min..max`, time: result.time, low: result.min.get(node)!, high: result.max.get(node)! },
-      { kind: 'line', name: `${node} nominal`, time: result.time, values: result.nominal.get(node)! },
+      { kind: 'band', name: `${node} min..max`, x: result.time, low: result.min.get(node)!, high: result.max.get(node)! },
+      { kind: 'line', name: `${node} nominal`, x: result.time, values: result.nominal.get(node)! },
     ],
     colours: [colour(i), colour(i)],
   }));
@@ -18,8 +18,8 @@ export function envelopeFigure(result: Envelope, circuitName: string, fileName: 
       title: `ADC ${adc.name} codes`,
       unit: '',
       series: [
-        { kind: 'band', name: `${adc.name} min..max`, time: adc.time, low: adc.min, high: adc.max, stepped: true },
-        { kind: 'steps', name: `${adc.name} nominal`, time: adc.time, values: adc.nominal },
+        { kind: 'band', name: `${adc.name} min..max`, x: adc.time, low: adc.min, high: adc.max, stepped: true },
+        { kind: 'steps', name: `${adc.name} nominal`, x: adc.time, values: adc.nominal },
       ],
       colours: [colour(panels.length), colour(panels.length)],
     });

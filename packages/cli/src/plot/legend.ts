@@ -54,9 +54,11 @@ export function legend(series: readonly Series[], colours: readonly string[], la
     const swatch =
       s.kind === 'band' || s.kind === 'spans'
         ? element('rect', { x, y: y - 5, width: 14, height: 10, fill: colours[i], 'fill-opacity': s.kind === 'spans' ? 0.12 : 0.22, stroke: colours[i], 'stroke-opacity': 0.5 })
-        : s.kind === 'marks'
-          ? element('circle', { cx: x + 7, cy: y, r: 3.5, fill: 'none', stroke: colours[i], 'stroke-width': 1.5 })
-          : element('line', { x1: x, x2: x + 14, y1: y, y2: y, stroke: colours[i], 'stroke-width': 2, 'stroke-dasharray': s.dashed ? '5 3' : undefined });
+        : s.kind === 'rules'
+          ? element('line', { x1: x + 7, x2: x + 7, y1: y - 6, y2: y + 6, stroke: colours[i], 'stroke-width': 1.5, 'stroke-dasharray': '2 2' })
+          : s.kind === 'marks'
+            ? element('circle', { cx: x + 7, cy: y, r: 3.5, fill: 'none', stroke: colours[i], 'stroke-width': 1.5 })
+            : element('line', { x1: x, x2: x + 14, y1: y, y2: y, stroke: colours[i], 'stroke-width': 2, 'stroke-dasharray': s.dashed ? '5 3' : undefined });
     return swatch + text(x + swatchWidth, y + 4, s.name);
   });
   return element('g', { class: 'legend', 'font-size': 11, fill: '#333333' }, ...keys);

@@ -1,5 +1,5 @@
-import { scaleLinear } from 'd3-scale';
-import { timeAxis, valueAxis } from './axes.ts';
+import { scaleLinear, scaleLog, type ScaleContinuousNumeric } from 'd3-scale';
+import { abscissaAxis, valueAxis } from './axes.ts';
 import { drawSeries } from './draw-series.ts';
 import { layoutLegend, legend, legendRowHeight, titleCharWidth, type LegendLayout } from './legend.ts';
 import type { Figure, Panel, Series } from './series.ts';
@@ -10,21 +10,22 @@ const panelHeight = 240;
 const margin = { left: 78, right: 24, top: 72, between: 44, bottom: 48 };
 
 /**
- * A figure as a standalone SVG document: title, then panels stacked on one time axis, each
- * with its value axis, grid, series and legend. Fonts are generic families, so the file looks
+ * A figure as a standalone SVG document: title, then panels stacked on one abscissa (time,
+ * linear; or frequency, log), each with its value axis, grid, series and legend. Fonts are generic families, so the file looks
  * the same in a browser, an editor preview or a report.
  */
 export function renderFigure(figure: Figure): string {
   const panels = figure.panels;
-  const [start, end] = timeSpan(panels);
-  const x = scaleLinear().domain([start, end]).range([margin.left, width - margin.right]);
+  const axis = figure.axis ?? 'time';
+  const [start, end] = abscissaSpan(panels);
+  const x = (axis === 'frequency' ? scaleLog() : scaleLinear()).domain([start, end]).range([margin.left, width - margin.right]);
   // Each panel's key sits above it: extra rows of key push the panel down.
   let cursor = margin.top;
   const body = panels.map((panel, i) => {
     const key = layoutLegend(panel.series, margin.left, width - margin.right, titleCharWidth * panel.title.length);
     const top = cursor + (key.rows - 1) * legendRowHeight;
     cursor = top + panelHeight + margin.between;
-    return drawPanel(panel, key, x, top, i === panels.length - 1);
+    return drawPanel(panel, key, x, axis, top, i === panels.length - 1);
   });
   const height = cursor - margin.between + margin.bottom;
   const header = [
@@ -40,7 +41,7 @@ export function renderFigure(figure: Figure): string {
   )}\n`;
 }
 
-function drawPanel(panel: Panel, key: LegendLayout, x: ReturnType<typeof scaleLinear<number, number>>, top: number, last: boolean): string {
+function drawPanel(panel: Panel, key: LegendLayout, x: ScaleContinuousNumeric<number, number>, axis: 'time' | 'frequency', top: number, last: boolean): string {
   const bottom = top + panelHeight;
   const [low, high] = valueSpan(panel.series);
   const pad = (high - low) * 0.06 || Math.abs(high) * 0.1 || 1;
@@ -52,7 +53,7 @@ function drawPanel(panel: Panel, key: LegendLayout, x: ReturnType<typeof scaleLi
     'g',
     { class: 'panel' },
     element('defs', {}, element('clipPath', { id: clipId }, element('rect', { x: left, y: top, width: right - left, height: panelHeight }))),
-    timeAxis(x, top, bottom, last),
+    abscissaAxis(x, axis, top, bottom, last),
     valueAxis(y, left, right, panel.unit),
     element('g', { 'clip-path': `url(#${clipId})` }, ...panel.series.map((s, i) => drawSeries(s, panel.colours[i], x, y))),
     element('rect', { class: 'frame', x: left, y: top, width: right - left, height: panelHeight, fill: 'none', stroke: '#999' }),
@@ -61,13 +62,13 @@ function drawPanel(panel: Panel, key: LegendLayout, x: ReturnType<typeof scaleLi
   );
 }
 
-function timeSpan(panels: readonly Panel[]): [number, number] {
+function abscissaSpan(panels: readonly Panel[]): [number, number] {
   let start = Infinity;
   let end = -Infinity;
   for (const s of panels.flatMap((p) => p.series)) {
-    if (s.kind === 'spans' || s.time.length === 0) continue;
-    start = Math.min(start, s.time[0]);
-    end = Math.max(end, s.time[s.time.length - 1]);
+    if (s.kind === 'spans' || s.kind === 'rules' || s.x.length === 0) continue;
+    start = Math.min(start, s.x[0]);
+    end = Math.max(end, s.x[s.x.length - 1]);
   }
   return start < end ? [start, end] : [0, 1];
 }
@@ -82,7 +83,7 @@ function valueSpan(series: readonly Series[]): [number, number] {
   };
   for (const s of series) {
     if (s.kind === 'band') take(s.low), take(s.high);
-    else if (s.kind !== 'spans') take(s.values);
+    else if (s.kind !== 'spans' && s.kind !== 'rules') take(s.values);
   }
   return low <= high ? [low, high] : [0, 1];
 }

@@ -7,7 +7,7 @@ import type { Figure, Panel, Series } from './series.ts';
  * amplifier sat at a rail shaded, then per ADC its codes as steps.
  */
 export function runFigure(circuit: Circuit, fileName: string, result: TransientResult, adcs: readonly AdcReadout[] = [], saturation: readonly SaturationInterval[] = []): Figure {
-  const lines: Series[] = result.recorded.map((node) => ({ kind: 'line' as const, name: node, time: result.time, values: result.columns.get(node)! }));
+  const lines: Series[] = result.recorded.map((node) => ({ kind: 'line' as const, name: node, x: result.time, values: result.columns.get(node)! }));
   const parts = [...new Set(saturation.map((s) => s.part))];
   const spans: Series[] = parts.map((part) => {
     const own = saturation.filter((s) => s.part === part);
@@ -19,7 +19,7 @@ export function runFigure(circuit: Circuit, fileName: string, result: TransientR
     panels.push({
       title: `ADC ${adc.spec.name} codes (${adc.spec.bits} bits)`,
       unit: '',
-      series: [{ kind: 'steps', name: adc.spec.name, time: adc.time, values: adc.code }],
+      series: [{ kind: 'steps', name: adc.spec.name, x: adc.time, values: adc.code }],
       colours: [colour(lines.length + panels.length - 1)],
     });
   }

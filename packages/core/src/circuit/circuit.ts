@@ -25,6 +25,18 @@ export interface Accuracy {
   readonly amps: number;
 }
 
+/** `response:`: the frequency sweep of `voltcast response` and `frequencyResponse`. */
+export interface ResponseSettings {
+  /** Name of the voltage or current source that carries the 1 V (1 A) test signal. */
+  readonly input: string;
+  /** Lowest frequency, Hz. */
+  readonly from: number;
+  /** Highest frequency, Hz. */
+  readonly to: number;
+  /** Log-spaced points per decade. */
+  readonly perDecade: number;
+}
+
 /** A validated circuit: what the parser returns and what `simulate` takes. */
 export interface Circuit {
   readonly name: string;
@@ -36,6 +48,8 @@ export interface Circuit {
   readonly nodes: readonly string[];
   /** Converters of the `adc:` section; their sampling parts are among `parts`. */
   readonly adcs: readonly AdcSpec[];
+  /** The `response:` section, when the file has one. */
+  readonly response?: ResponseSettings;
 }
 
 /** Defaults for `simulate:` keys the file leaves out. */

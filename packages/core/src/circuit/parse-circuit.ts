@@ -11,6 +11,7 @@ import { checkConnections, nodesInOrder } from './connections.ts';
 import { suggestion } from '../reading/suggest.ts';
 import { partKinds } from '../parts/index.ts';
 import { readAdcSection } from './read-adc.ts';
+import { readResponseSection } from './read-response.ts';
 import type { PartSpecBase } from '../parts/part-kind.ts';
 import { quantities } from '../units/quantity.ts';
 import { formatSI } from '../units/format.ts';
@@ -80,6 +81,7 @@ function readDocument(tree: YamlNode, sink: IssueSink, context: ReadContext, sta
   const simulate = readSimulate(top.need('simulate', 'write simulate: { duration: 10m }'));
   const recordValue = top.get('record');
   const adcValue = top.get('adc');
+  const response = readResponseSection(top.get('response'), parts.specs);
   top.finish();
 
   // A converter's sampling adds parts (switch, capacitor) and nodes of its own.
@@ -93,7 +95,8 @@ function readDocument(tree: YamlNode, sink: IssueSink, context: ReadContext, sta
   if (parts.complete) checkConnections(parts.specs, watched, top.get('parts'), sink);
 
   if (sink.issues.some((issue) => issue.severity === 'error')) return { issues: sink.issues };
-  return { circuit: { name, parts: specs, simulate, recorded, nodes, adcs: adc.adcs }, issues: sink.issues };
+  const circuit: Circuit = { name, parts: specs, simulate, recorded, nodes, adcs: adc.adcs, ...(response !== undefined ? { response } : {}) };
+  return { circuit, issues: sink.issues };
 }
 
 function readName(top: MapReader): string {

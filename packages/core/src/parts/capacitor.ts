@@ -1,8 +1,8 @@
 import { quantities } from '../units/quantity.ts';
-import { stampBranchIncidence, stampBranchVoltage } from './stamps.ts';
+import { stampAdmittance, stampBranchIncidence, stampBranchVoltage } from './stamps.ts';
 import { CapacitorCompanion } from './capacitor-companion.ts';
 import { across } from './solution.ts';
-import type { Binder, Device, Link, Mna, StepInfo } from './device.ts';
+import type { Binder, ComplexMna, Device, Link, Mna, StepInfo } from './device.ts';
 import type { PartKind, PartSpecBase } from './part-kind.ts';
 import { tolerableField } from './tolerance.ts';
 import { nodeOf, readBetween } from './pins.ts';
@@ -76,6 +76,18 @@ class CapacitorDevice implements Device {
   stampRhs(m: Mna, step: StepInfo): void {
     if (this.k < 0) this.companion.stampRhs(m, this.a, this.b, step);
     else m.rhs(this.k, step.method === 'dc' ? this.spec.initial ?? 0 : this.companion.history(step));
+  }
+  /** Admittance j·omega·C; with a branch current, the branch row j·omega·C·(va - vb) - i = 0. */
+  stampSmallSignal(m: ComplexMna, _x: Float64Array, omega: number): void {
+    const susceptance = omega * this.spec.capacitance;
+    if (this.k < 0) {
+      stampAdmittance(m, this.a, this.b, 0, susceptance);
+      return;
+    }
+    this.stampStatic(m);
+    m.add(this.k, this.a, 0, susceptance);
+    m.add(this.k, this.b, 0, -susceptance);
+    m.add(this.k, this.k, -1);
   }
   accept(x: Float64Array, step: StepInfo): void {
     this.companion.accept(across(x, this.a, this.b), step, this.k >= 0 ? x[this.k] : undefined);

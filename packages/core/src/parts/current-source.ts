@@ -2,7 +2,7 @@ import { quantities } from '../units/quantity.ts';
 import { readStimulus } from '../waves/index.ts';
 import type { Wave } from '../waves/wave.ts';
 import { stampCurrent } from './stamps.ts';
-import type { Binder, Device, Link, Mna, StepInfo } from './device.ts';
+import type { Binder, ComplexMna, Device, Link, Mna, StepInfo } from './device.ts';
 import type { PartKind, PartSpecBase } from './part-kind.ts';
 import { sourceTolerance } from './source-tolerance.ts';
 import { nodeOf, readBetween } from './pins.ts';
@@ -41,6 +41,11 @@ class CurrentSourceDevice implements Device {
   }
   stampRhs(m: Mna, step: StepInfo): void {
     stampCurrent(m, this.a, this.b, this.spec.wave.value(step.t) * step.sourceScale);
+  }
+  /** Zero in the small-signal circuit: an open, so nothing to stamp. */
+  stampSmallSignal(): void {}
+  stampTestSignal(m: ComplexMna): void {
+    stampCurrent(m, this.a, this.b, 1);
   }
   nextCorner(t: number): number {
     return this.spec.wave.nextCorner(t);

@@ -18,6 +18,24 @@
  * 6. `accept` when a step (or the operating point) is accepted: update history from `x`.
  *
  * Devices allocate nothing after `bind`: steps 2 to 6 run in the per-step loop.
+ *
+ * The small-signal analyses (frequency response, loop gain, noise) call, after the operating
+ * point `x` has been found with steps 1 to 6:
+ *
+ * 7. `stampSmallSignal` once per frequency: the device linearized at `x`, as complex
+ *    admittances at angular frequency `omega` (a capacitance adds j·omega·C, an inductor's
+ *    branch row -j·omega·L; a nonlinear device stamps the slopes of its characteristic at
+ *    `x`, a piecewise one the piece `x` lies in). Matrix entries only: independent sources are
+ *    zero in the small-signal circuit, so nothing goes on the right-hand side. A
+ *    `ComplexMna` is also an `Mna` whose entries are real, so frequency-independent parts
+ *    reuse `stampStatic` and the helpers of `stamps.ts`. Allocates nothing.
+ * 8. `stampTestSignal`, sources only: the right-hand side of the 1 V (1 A) test signal at zero
+ *    phase, for the source named as the response's input.
+ * 9. `gainStage`, amplifiers only: the controlled source inside the device where the loop-gain
+ *    analysis breaks the loop to measure its return ratio, linearized at `x`.
+ *
+ * A device without `stampSmallSignal` makes the small-signal analyses refuse the circuit
+ * with a message naming it.
  */
 export interface Device {
   readonly name: string;
@@ -44,6 +62,12 @@ export interface Device {
    * (inductor currents).
    */
   stateUnknowns?(): readonly number[];
+  /** The linearization at the operating point `x` at angular frequency `omega` (contract item 7). */
+  stampSmallSignal?(m: ComplexMna, x: Float64Array, omega: number): void;
+  /** The 1 V or 1 A test signal of a source used as the response's input (contract item 8). */
+  stampTestSignal?(m: ComplexMna): void;
+  /** Where to break an amplifier's loop for its return ratio, at the operating point `x` (contract item 9). */
+  gainStage?(x: Float64Array): GainStage;
 }
 
 /**
@@ -87,4 +111,31 @@ export interface Mna {
   add(row: number, col: number, value: number): void;
   /** Add `value` to the right-hand side at `row`. */
   rhs(row: number, value: number): void;
+}
+
+/**
+ * Complex assembly target of the small-signal analyses: entries `re + j·im`. With `im` left
+ * out an entry is real, so a `ComplexMna` serves wherever an `Mna` is taken.
+ */
+export interface ComplexMna extends Mna {
+  /** Add `re + j·im` to the matrix entry at (row, col). */
+  add(row: number, col: number, re: number, im?: number): void;
+  /** Add `re + j·im` to the right-hand side at `row`. */
+  rhs(row: number, re: number, im?: number): void;
+}
+
+/**
+ * A voltage-controlled current source inside a device, linearized at the operating point: the
+ * current `transconductance · (v(p) - v(n))` enters unknown `into` and leaves `from` (-1 is
+ * ground). The loop-gain analysis replaces its controlling voltage by a test signal and reads
+ * what returns to `p` and `n`.
+ */
+export interface GainStage {
+  readonly into: number;
+  readonly from: number;
+  readonly p: number;
+  readonly n: number;
+  readonly transconductance: number;
+  /** The amplifier's output pin, where its open-loop gain is read. */
+  readonly output: number;
 }

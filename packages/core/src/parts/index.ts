@@ -8,7 +8,7 @@ import { vcvs } from './vcvs.ts';
 import { opamp } from './opamp.ts';
 import { timedSwitch } from './switch.ts';
 
-export type { Device, Binder, Mna, StepInfo, Method, Link } from './device.ts';
+export type { Device, Binder, Mna, ComplexMna, GainStage, StepInfo, Method, Link } from './device.ts';
 export type { PartKind, PartSpecBase, PinRef } from './part-kind.ts';
 
 /** Every part kind, by its YAML key. Adding a kind: one file and one line here. */

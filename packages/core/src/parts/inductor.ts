@@ -1,7 +1,7 @@
 import { quantities } from '../units/quantity.ts';
 import { stampBranchIncidence, stampBranchVoltage } from './stamps.ts';
 import { across } from './solution.ts';
-import type { Binder, Device, Link, Mna, StepInfo } from './device.ts';
+import type { Binder, ComplexMna, Device, Link, Mna, StepInfo } from './device.ts';
 import type { PartKind, PartSpecBase } from './part-kind.ts';
 import { tolerableField } from './tolerance.ts';
 import { nodeOf, readBetween } from './pins.ts';
@@ -72,6 +72,12 @@ class InductorDevice implements Device {
       return;
     }
     m.rhs(this.k, -this.r * this.iPrev - (step.method === 'trap' ? this.vPrev : 0));
+  }
+  /** Branch row v(a) - v(b) - j·omega·L·i = 0, whatever `initial` held at the operating point. */
+  stampSmallSignal(m: ComplexMna, _x: Float64Array, omega: number): void {
+    this.stampStatic(m);
+    stampBranchVoltage(m, this.k, this.a, this.b);
+    m.add(this.k, this.k, 0, -omega * this.spec.inductance);
   }
   accept(x: Float64Array): void {
     this.vPrev = across(x, this.a, this.b);

@@ -1,7 +1,7 @@
-import { stampBranchIncidence, stampConductance, stampCurrent } from './stamps.ts';
+import { stampAdmittance, stampBranchIncidence, stampConductance, stampCurrent, stampTransconductance } from './stamps.ts';
 import { CapacitorCompanion } from './capacitor-companion.ts';
 import { across, valueAt } from './solution.ts';
-import type { Binder, Device, Link, Mna, StepInfo } from './device.ts';
+import type { Binder, ComplexMna, Device, GainStage, Link, Mna, StepInfo } from './device.ts';
 import type { PartKind } from './part-kind.ts';
 import { nodeOf } from './pins.ts';
 import { readOpamp } from './opamp-read.ts';
@@ -43,6 +43,11 @@ const G2 = 1e-3;
  * amplifier recovers from saturation at its slew rate. An optional unity-gain lag adds a
  * second pole; a unity buffer then drives the output through rout, optionally with a tanh
  * current limit. The clamp is piecewise: entering or leaving it is an event.
+ *
+ * Small-signal, each nonlinear piece contributes its slope at the operating point: the input
+ * stage gm·(1 - tanh²), the clamp's conductance when the gain node sits beyond it, and the
+ * current limit's (1 - tanh²)/rout. The transconductance stage is where the loop-gain
+ * analysis breaks the loop.
  */
 class OpampDevice implements Device {
   readonly kind = 'opamp';
@@ -144,8 +149,7 @@ class OpampDevice implements Device {
     const g = this.gm * (1 - th * th);
     const vdLin = (uLin * this.imax) / this.gm;
     // Current i0 + g·(vp - vm + offset - vdLin) enters n1.
-    m.add(this.n1, this.p, -g);
-    m.add(this.n1, this.m, g);
+    stampTransconductance(m, this.n1, -1, this.p, this.m, g);
     m.rhs(this.n1, i0 + g * (q.offset - vdLin));
 
     this.stampClamp(m, x);
@@ -158,12 +162,41 @@ class OpampDevice implements Device {
     const region = this.region(x);
     if (region === 0) return;
     const rail = this.spec.supply![region > 0 ? 1 : 0];
-    const node = region > 0 ? this.high : this.low;
     const headroom = this.spec.parameters.headroom[region > 0 ? 1 : 0] * region;
     // i = gClamp·(v1 - (v(rail) - headroom)) leaves n1.
+    this.stampClampSlope(m, region);
+    m.rhs(this.n1, this.gClamp * (('volts' in rail ? rail.volts : 0) - headroom));
+  }
+
+  /** The clamp's conductance from the gain node to the rail of `region` (1 high, -1 low). */
+  private stampClampSlope(m: Mna, region: number): void {
+    const node = region > 0 ? this.high : this.low;
     m.add(this.n1, this.n1, this.gClamp);
     m.add(this.n1, node, -this.gClamp);
-    m.rhs(this.n1, this.gClamp * (('volts' in rail ? rail.volts : 0) - headroom));
+  }
+
+  /** Slope of the input stage's current against the differential input at `x`: gm·(1 - tanh²). */
+  private inputSlope(x: Float64Array): number {
+    const th = Math.tanh((this.gm * (across(x, this.p, this.m) + this.spec.parameters.offset)) / this.imax);
+    return this.gm * (1 - th * th);
+  }
+
+  stampSmallSignal(m: ComplexMna, x: Float64Array, omega: number): void {
+    this.stampStatic(m);
+    stampAdmittance(m, this.n1, -1, 0, omega * C1);
+    if (this.c2 !== null) stampAdmittance(m, this.n2, -1, 0, omega * this.c2.capacitance);
+    stampTransconductance(m, this.n1, -1, this.p, this.m, this.inputSlope(x));
+    const region = this.region(x);
+    if (region !== 0) this.stampClampSlope(m, region);
+    const q = this.spec.parameters;
+    if (q.currentLimit !== undefined) {
+      const th = Math.tanh(across(x, this.drive, this.out) / (q.rout * q.currentLimit));
+      stampConductance(m, this.drive, this.out, (1 - th * th) / q.rout);
+    }
+  }
+
+  gainStage(x: Float64Array): GainStage {
+    return { into: this.n1, from: -1, p: this.p, n: this.m, transconductance: this.inputSlope(x), output: this.out };
   }
 
   /** Output current i = Ilim·tanh(v/(rout·Ilim)) from drive to out, linearized; true when limited. */

@@ -1,6 +1,6 @@
 import { quantities } from '../units/quantity.ts';
 import { stampConductance } from './stamps.ts';
-import type { Binder, Device, Link, Mna } from './device.ts';
+import type { Binder, ComplexMna, Device, Link, Mna } from './device.ts';
 import type { PartKind, PartSpecBase } from './part-kind.ts';
 import { tolerableField } from './tolerance.ts';
 import { nodeOf, readBetween } from './pins.ts';
@@ -39,6 +39,9 @@ class ResistorDevice implements Device {
   }
   stampStatic(m: Mna): void {
     stampConductance(m, this.a, this.b, 1 / this.spec.resistance);
+  }
+  stampSmallSignal(m: ComplexMna): void {
+    this.stampStatic(m);
   }
   links(): readonly Link[] {
     return [{ a: this.a, b: this.b, kind: 'conductive' }];

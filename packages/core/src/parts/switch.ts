@@ -3,7 +3,7 @@ import { quantities } from '../units/quantity.ts';
 import { formatSI } from '../units/format.ts';
 import { stampConductance } from './stamps.ts';
 import { periodIndex } from '../waves/periodic.ts';
-import type { Binder, Device, Link, Mna, StepInfo } from './device.ts';
+import type { Binder, ComplexMna, Device, Link, Mna, StepInfo } from './device.ts';
 import type { PartKind, PartSpecBase } from './part-kind.ts';
 import { nodeOf, readBetween } from './pins.ts';
 
@@ -156,7 +156,13 @@ class SwitchDevice implements Device {
     this.b = binder.node(nodeOf(this.spec.pins, 'b'));
   }
   stampStep(m: Mna, step: StepInfo): void {
-    const when = step.method === 'dc' ? this.beforeStart : step.t - step.h / 2;
+    this.stampState(m, step.method === 'dc' ? this.beforeStart : step.t - step.h / 2);
+  }
+  /** The state the operating point was found in, the one the run starts from. */
+  stampSmallSignal(m: ComplexMna): void {
+    this.stampState(m, this.beforeStart);
+  }
+  private stampState(m: Mna, when: number): void {
     const closed = isClosed(this.spec.schedule, when);
     stampConductance(m, this.a, this.b, 1 / (closed ? this.spec.onResistance : this.spec.offResistance));
   }

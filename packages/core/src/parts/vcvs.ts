@@ -1,6 +1,6 @@
 import { quantities } from '../units/quantity.ts';
 import { stampBranchIncidence, stampBranchVoltage } from './stamps.ts';
-import type { Binder, Device, Link, Mna } from './device.ts';
+import type { Binder, ComplexMna, Device, Link, Mna } from './device.ts';
 import type { PartKind, PartSpecBase } from './part-kind.ts';
 import { tolerableField } from './tolerance.ts';
 import { nodeOf, pinRef, readBetween } from './pins.ts';
@@ -55,6 +55,9 @@ class VcvsDevice implements Device {
     stampBranchVoltage(m, this.k, this.a, this.b);
     m.add(this.k, this.p, -this.spec.gain);
     m.add(this.k, this.n, this.spec.gain);
+  }
+  stampSmallSignal(m: ComplexMna): void {
+    this.stampStatic(m);
   }
   links(): readonly Link[] {
     return [{ a: this.a, b: this.b, kind: 'voltage' }];

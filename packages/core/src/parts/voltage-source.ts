@@ -2,7 +2,7 @@ import { quantities } from '../units/quantity.ts';
 import { readStimulus } from '../waves/index.ts';
 import type { Wave } from '../waves/wave.ts';
 import { stampBranchIncidence, stampBranchVoltage } from './stamps.ts';
-import type { Binder, Device, Link, Mna, StepInfo } from './device.ts';
+import type { Binder, ComplexMna, Device, Link, Mna, StepInfo } from './device.ts';
 import type { PartKind, PartSpecBase } from './part-kind.ts';
 import { sourceTolerance } from './source-tolerance.ts';
 import { nodeOf, readBetween } from './pins.ts';
@@ -48,6 +48,13 @@ class VoltageSourceDevice implements Device {
   }
   stampRhs(m: Mna, step: StepInfo): void {
     m.rhs(this.k, this.spec.wave.value(step.t) * step.sourceScale);
+  }
+  /** Zero in the small-signal circuit: a short held by its branch row. */
+  stampSmallSignal(m: ComplexMna): void {
+    this.stampStatic(m);
+  }
+  stampTestSignal(m: ComplexMna): void {
+    m.rhs(this.k, 1);
   }
   nextCorner(t: number): number {
     return this.spec.wave.nextCorner(t);

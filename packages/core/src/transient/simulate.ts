@@ -1,13 +1,11 @@
 import type { Circuit } from '../circuit/circuit.ts';
 import type { StepInfo } from '../parts/device.ts';
-import { partKind } from '../parts/index.ts';
-import { Topology } from '../solver/topology.ts';
-import { Equations } from './equations.ts';
+import { circuitEquations, newRunStats } from './circuit-equations.ts';
 import { solveOperatingPoint } from './operating-point.ts';
 import { OutputGrid } from './output-grid.ts';
 import { OutputRecorder } from './output-recorder.ts';
 import { ObserverHub } from './observer-hub.ts';
-import type { RunStats, SimulateOptions, TransientResult } from './result.ts';
+import type { SimulateOptions, TransientResult } from './result.ts';
 import { SimulationError } from './simulation-error.ts';
 import { TruncationError } from './truncation-error.ts';
 import { formatSI } from '../units/format.ts';
@@ -20,8 +18,6 @@ const MAX_GROWTH = 2;
 const GROW_ABOVE = 1.5;
 /** Safety factor on the step the error estimate proposes. */
 const SAFETY = 0.9;
-/** Newton iterations before a step is cut. */
-const NEWTON_ITERATIONS = 40;
 
 /**
  * Transient analysis: operating point at t = 0, then trapezoidal steps with error control.
@@ -31,32 +27,8 @@ const NEWTON_ITERATIONS = 40;
  */
 export function simulate(circuit: Circuit, options: SimulateOptions = {}): TransientResult {
   const settings = circuit.simulate;
-  const stats: RunStats = {
-    acceptedSteps: 0,
-    rejectedSteps: 0,
-    factorizations: 0,
-    solves: 0,
-    newtonIterations: 0,
-    newtonFailures: 0,
-    dampingSteps: 0,
-    minStep: Infinity,
-    maxStep: 0,
-  };
-  const devices = circuit.parts.map((spec) => partKind(spec.kind).create(spec));
-  const topology = new Topology(circuit.nodes);
-  for (const device of devices) device.bind(topology);
-  const equations = new Equations(
-    devices,
-    topology,
-    {
-      maxIterations: NEWTON_ITERATIONS,
-      relative: settings.accuracy.relative * 1e-2,
-      voltage: settings.accuracy.volts,
-      current: settings.accuracy.amps,
-    },
-    stats,
-    options.matrix,
-  );
+  const stats = newRunStats();
+  const { devices, topology, equations } = circuitEquations(circuit, stats, options.matrix);
   const n = equations.size;
   const duration = settings.duration;
   const fixed = settings.fixedStep;
