@@ -1,7 +1,7 @@
 // `pnpm bench`: how fast the engine runs, printed with the targets of the work that set them
 // (each target beside the ratio measured in this same run). Speed is shown here, never
 // asserted by a timed test. `pnpm bench WORD` runs only the sections whose title contains WORD.
-import { parseCircuit, simulate, type SimulateOptions } from '@voltcast/core';
+import { frequencyResponse, parseCircuit, simulate, type SimulateOptions } from '@voltcast/core';
 import { differentiatorIntoRails, linearNetwork, rcLadder } from './cases.ts';
 import { bareSolveLoop } from './bare-loop.ts';
 // An internal constant, printed beside the measurements that chose it.
@@ -116,6 +116,35 @@ const sections: { title: string; run(): void }[] = [
           ((perStep(sparse) * 1e3).toFixed(2)).padStart(15),
           (perStep(sparse) / perStep(dense)).toFixed(2).padStart(13),
           String(sparse.factorizations).padStart(6),
+        );
+      }
+    },
+  },
+  {
+    title: 'frequency sweeps: 10 Hz to 10 MHz, 50 points per decade (second run of each)',
+    run() {
+      // One complex factorization per point for the response, one per point and op-amp for
+      // the loop gains, plus the solves that refine crossings and peaks, and for a short
+      // margin the trial sweeps of its hints. The first run compiles the code; the second is timed.
+      const cases = [
+        { name: 'RC ladder, 10 sections', text: rcLadder(10, 1e-3), input: 'SRC' },
+        { name: 'RC ladder, 100 sections', text: rcLadder(100, 1e-3), input: 'SRC' },
+        { name: 'op-amp differentiator, with margin hints', text: differentiatorIntoRails(1), input: 'SQ' },
+      ];
+      console.log('  ' + 'case'.padEnd(52), 'points'.padStart(10), 'points/s'.padStart(12), 'seconds'.padStart(9), 'LU'.padStart(7));
+      for (const c of cases) {
+        const circuit = parseCircuit(`${c.text}\nresponse: { input: ${c.input}, from: 10, to: 10M }\n`, { fileName: 'bench.yaml' });
+        frequencyResponse(circuit);
+        const start = performance.now();
+        const response = frequencyResponse(circuit);
+        const seconds = (performance.now() - start) / 1000;
+        const points = response.frequency.length;
+        console.log(
+          '  ' + c.name.padEnd(52),
+          String(points).padStart(10),
+          Math.round(points / seconds).toLocaleString('en-US').padStart(12),
+          seconds.toFixed(3).padStart(9),
+          String(response.stats.factorizations).padStart(7),
         );
       }
     },

@@ -17,13 +17,12 @@ export function responseFigure(circuitName: string, fileName: string, response: 
   const gainColours = response.nodes.map((_, i) => colour(i));
   const phaseColours = [...gainColours];
   response.loops.forEach((loop, i) => {
-    const open = colour(response.nodes.length + 2 * i);
-    const ideal = colour(response.nodes.length + 2 * i + 1);
+    const [open, ideal, loopPhase] = [0, 1, 2].map((k) => colour(response.nodes.length + 3 * i + k));
     gain.push({ kind: 'line', name: `${loop.part} open-loop gain`, x: f, values: loop.openLoopDb });
     gain.push({ kind: 'line', name: `${loop.part} ideal gain 1/β`, x: f, values: loop.noiseGainDb, dashed: true });
     phase.push({ kind: 'line', name: `${loop.part} loop gain phase ∠T`, x: f, values: loop.degrees });
     gainColours.push(open, ideal);
-    phaseColours.push(open);
+    phaseColours.push(loopPhase);
     if (loop.crossover !== null) {
       const rule: Series = { kind: 'rules', name: `${loop.part} crossover ${formatSI(loop.crossover, 'Hz')}, margin ${loop.phaseMargin!.toFixed(1)}°`, x: [loop.crossover] };
       gain.push(rule);

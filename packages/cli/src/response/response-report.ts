@@ -87,7 +87,7 @@ export function responseText(report: ResponseReport): string {
   ];
   if (report.loops.length === 0) lines.push('  none: no amplifier');
   else {
-    lines.push(...textTable([['part', 'state', 'crossover', 'phase margin', 'gain margin', 'at', `against ${report.targetMargin}°`], ...report.loops.map((l) => [l.part, l.state, hertz(l.crossover), angle(l.phaseMargin), decibels(l.gainMargin), hertz(l.phaseCrossover), judgement(l.phaseMargin, report.targetMargin)])], 2));
+    lines.push(...textTable([['part', 'state', 'crossover', 'phase margin', 'gain margin', 'at -180°', `against ${report.targetMargin}°`], ...report.loops.map((l) => [l.part, l.state, hertz(l.crossover), angle(l.phaseMargin), decibels(l.gainMargin), hertz(l.phaseCrossover), judgement(l.phaseMargin, report.targetMargin)])], 2));
     for (const l of report.loops) if (l.hint !== undefined) lines.push(...wrap(`hint: ${l.hint.text}`, 100, '      '));
   }
   lines.push('', 'nodes (gain and phase relative to the input)');
