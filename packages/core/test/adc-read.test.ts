@@ -1,6 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { readCircuit } from '../src/circuit/parse-circuit.ts';
-import { formatIssue } from '../src/reading/issue.ts';
+import { readMessages } from './support/read-messages.ts';
 
 function read(adc: string) {
   const text = `circuit: adc-read
@@ -12,8 +11,7 @@ simulate: { duration: 1m }
 adc:
 ${adc}
 `;
-  const { circuit, issues } = readCircuit(text);
-  return { circuit, messages: issues.map((issue) => formatIssue(issue, 'a.yaml')) };
+  return readMessages(text);
 }
 
 describe('reading the adc section', () => {

@@ -1,6 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { readCircuit } from '../src/circuit/parse-circuit.ts';
-import { formatIssue } from '../src/reading/issue.ts';
+import { readMessages } from './support/read-messages.ts';
 
 function read(response: string) {
   const text = `circuit: response-read
@@ -11,8 +10,7 @@ parts:
 simulate: { duration: 1m }
 response: ${response}
 `;
-  const { circuit, issues } = readCircuit(text);
-  return { circuit, messages: issues.map((issue) => formatIssue(issue, 'a.yaml')) };
+  return readMessages(text);
 }
 
 describe('reading the response section', () => {
@@ -24,7 +22,7 @@ describe('reading the response section', () => {
   });
 
   it('leaves the circuit without one when the section is absent', () => {
-    const { circuit } = readCircuit('circuit: x\nparts:\n  VIN: { voltage: 1, between: [in, gnd] }\n  R1: { resistor: 1k, between: [in, gnd] }\nsimulate: { duration: 1m }\n');
+    const { circuit } = readMessages('circuit: x\nparts:\n  VIN: { voltage: 1, between: [in, gnd] }\n  R1: { resistor: 1k, between: [in, gnd] }\nsimulate: { duration: 1m }\n');
     expect(circuit).toBeDefined();
     expect(circuit!.response).toBeUndefined();
   });

@@ -1,4 +1,5 @@
-import type { PartSpecBase, PinRef } from '../parts/part-kind.ts';
+import type { PartSpecBase } from '../parts/part-kind.ts';
+import { betweenPins } from '../parts/pins.ts';
 import type { SwitchSchedule, SwitchSpec } from '../parts/switch.ts';
 import { defaultOffResistance } from '../parts/switch.ts';
 import type { CapacitorSpec } from '../parts/capacitor.ts';
@@ -21,16 +22,16 @@ export function samplingParts(adc: string, input: readonly [string, string], sam
   const sides = input[1] === 'gnd' ? [{ node: input[0], suffix: '' }] : [{ node: input[0], suffix: '-p' }, { node: input[1], suffix: '-n' }];
   const parts: PartSpecBase[] = [];
   if (sampling.precharge !== undefined) {
-    const source: VoltageSourceSpec = { kind: 'voltage', name: `${adc}.precharge-source`, wave: new ConstantWave(sampling.precharge), pins: pins(`${adc}.precharge`, 'gnd') };
+    const source: VoltageSourceSpec = { kind: 'voltage', name: `${adc}.precharge-source`, wave: new ConstantWave(sampling.precharge), pins: betweenPins(`${adc}.precharge`, 'gnd') };
     parts.push(source);
   }
   const held = sides.map(({ node, suffix }) => {
     const hold = `${adc}.hold${suffix}`;
-    const sample: SwitchSpec = { kind: 'switch', name: `${adc}.sample-switch${suffix}`, onResistance: sampling.resistance, offResistance: defaultOffResistance, schedule: windows, pins: pins(node, hold) };
-    const capacitor: CapacitorSpec = { kind: 'capacitor', name: `${adc}.sample-capacitor${suffix}`, capacitance: sampling.capacitance, pins: pins(hold, 'gnd') };
+    const sample: SwitchSpec = { kind: 'switch', name: `${adc}.sample-switch${suffix}`, onResistance: sampling.resistance, offResistance: defaultOffResistance, schedule: windows, pins: betweenPins(node, hold) };
+    const capacitor: CapacitorSpec = { kind: 'capacitor', name: `${adc}.sample-capacitor${suffix}`, capacitance: sampling.capacitance, pins: betweenPins(hold, 'gnd') };
     parts.push(sample, capacitor);
     if (sampling.precharge !== undefined) {
-      const reset: SwitchSpec = { kind: 'switch', name: `${adc}.precharge-switch${suffix}`, onResistance: prechargeResistance, offResistance: defaultOffResistance, schedule: { ...windows, inverted: true }, pins: pins(hold, `${adc}.precharge`) };
+      const reset: SwitchSpec = { kind: 'switch', name: `${adc}.precharge-switch${suffix}`, onResistance: prechargeResistance, offResistance: defaultOffResistance, schedule: { ...windows, inverted: true }, pins: betweenPins(hold, `${adc}.precharge`) };
       parts.push(reset);
     }
     return hold;
@@ -42,11 +43,4 @@ export function samplingParts(adc: string, input: readonly [string, string], sam
 function acquisitionWindows(acquisition: number, times: SampleTimes): SwitchSchedule {
   if ('rate' in times) return { edges: [0, acquisition], origin: times.start - acquisition, period: 1 / times.rate, inverted: false };
   return { edges: times.times.flatMap((t) => [t - acquisition, t]), origin: 0, period: Infinity, inverted: false };
-}
-
-function pins(a: string, b: string): PinRef[] {
-  return [
-    { pin: 'a', node: a, path: [] },
-    { pin: 'b', node: b, path: [] },
-  ];
 }

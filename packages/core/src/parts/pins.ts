@@ -21,6 +21,14 @@ export function pinRef(pin: string, value: { node(): string; path: readonly (str
   return { pin, node: value.node(), path: value.path, position: value.position };
 }
 
+/** The pins `a` and `b` of a two-pin part made in code (a converter's sampling parts, a hint's trial part): no place in a file. */
+export function betweenPins(a: string, b: string): PinRef[] {
+  return [
+    { pin: 'a', node: a, path: [] },
+    { pin: 'b', node: b, path: [] },
+  ];
+}
+
 /** The node of pin `pin` of a spec, for `bind`. */
 export function nodeOf(pins: readonly PinRef[], pin: string): string {
   const found = pins.find((p) => p.pin === pin);

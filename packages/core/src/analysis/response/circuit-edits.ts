@@ -1,6 +1,7 @@
 import type { Circuit } from '../../circuit/circuit.ts';
 import type { CapacitorSpec } from '../../parts/capacitor.ts';
-import type { PartSpecBase, PinRef } from '../../parts/part-kind.ts';
+import type { PartSpecBase } from '../../parts/part-kind.ts';
+import { betweenPins } from '../../parts/pins.ts';
 import type { ResistorSpec } from '../../parts/resistor.ts';
 import type { StageShape } from '../report/stage-shape.ts';
 
@@ -13,7 +14,7 @@ type Differentiator = Extract<StageShape, { shape: 'differentiator' }>;
 export function withFeedbackCapacitor(circuit: Circuit, shape: Differentiator, capacitance: number): Circuit {
   if (shape.feedbackCapacitor !== undefined) return replaced(circuit, shape.feedbackCapacitor, { capacitance });
   const rf = shape.feedbackResistor;
-  const added: CapacitorSpec = { kind: 'capacitor', name: `${rf.name}.feedback-capacitor`, capacitance, pins: twoPins(rf.pins[0].node, rf.pins[1].node) };
+  const added: CapacitorSpec = { kind: 'capacitor', name: `${rf.name}.feedback-capacitor`, capacitance, pins: betweenPins(rf.pins[0].node, rf.pins[1].node) };
   return { ...circuit, parts: [...circuit.parts, added] };
 }
 
@@ -28,17 +29,10 @@ export function withSeriesResistor(circuit: Circuit, shape: Differentiator, resi
   const far = cin.pins.find((p) => p.node !== summingNode)!.node;
   const between = `${cin.name}.series-node`;
   const moved: PartSpecBase = { ...cin, pins: cin.pins.map((p) => (p.node === far ? { ...p, node: between } : p)) };
-  const added: ResistorSpec = { kind: 'resistor', name: `${cin.name}.series-resistor`, resistance, pins: twoPins(far, between) };
+  const added: ResistorSpec = { kind: 'resistor', name: `${cin.name}.series-resistor`, resistance, pins: betweenPins(far, between) };
   return { ...circuit, parts: [...circuit.parts.map((p) => (p === cin ? moved : p)), added] };
 }
 
 function replaced(circuit: Circuit, part: PartSpecBase, change: object): Circuit {
   return { ...circuit, parts: circuit.parts.map((p) => (p === part ? { ...p, ...change } : p)) };
-}
-
-function twoPins(a: string, b: string): PinRef[] {
-  return [
-    { pin: 'a', node: a, path: [] },
-    { pin: 'b', node: b, path: [] },
-  ];
 }
