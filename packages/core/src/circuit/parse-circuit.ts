@@ -14,6 +14,7 @@ import { readAdcSection } from './read-adc.ts';
 import type { PartSpecBase } from '../parts/part-kind.ts';
 import { quantities } from '../units/quantity.ts';
 import { formatSI } from '../units/format.ts';
+import { ZERO_CELSIUS } from '../units/constants.ts';
 
 export interface ParseOptions extends ReadContext {
   /** Shown in error messages (`file:line:column`). */
@@ -149,6 +150,8 @@ function readSimulate(value: ValueReader | undefined): SimulateSettings {
     maxStep: keys?.numberOr('max-step', time, outputStep, positive) ?? NaN,
     fixedStep,
     accuracy: readAccuracy(keys?.get('accuracy')),
+    // Above absolute zero; beyond the range parts are rated for the models mean little, but that is the user's call.
+    temperature: keys?.numberOr('temperature', quantities.temperature, simulateDefaults.temperature, { above: -ZERO_CELSIUS }) ?? NaN,
   };
   keys?.finish();
   return settings;

@@ -9,7 +9,7 @@ import { opamp } from './opamp.ts';
 import { timedSwitch } from './switch.ts';
 
 export type { Device, Binder, Mna, StepInfo, Method, Link } from './device.ts';
-export type { PartKind, PartSpecBase, PinRef } from './part-kind.ts';
+export type { PartKind, PartSpecBase, PinRef, Conditions } from './part-kind.ts';
 
 /** Every part kind, by its YAML key. Adding a kind: one file and one line here. */
 export const partKinds: readonly PartKind<any>[] = [

@@ -1,6 +1,6 @@
 import type { Circuit } from '../circuit/circuit.ts';
 import type { StepInfo } from '../parts/device.ts';
-import { partKind } from '../parts/index.ts';
+import { createDevices } from '../circuit/devices.ts';
 import { Topology } from '../solver/topology.ts';
 import { Equations } from './equations.ts';
 import { solveOperatingPoint } from './operating-point.ts';
@@ -42,7 +42,7 @@ export function simulate(circuit: Circuit, options: SimulateOptions = {}): Trans
     minStep: Infinity,
     maxStep: 0,
   };
-  const devices = circuit.parts.map((spec) => partKind(spec.kind).create(spec));
+  const devices = createDevices(circuit);
   const topology = new Topology(circuit.nodes);
   for (const device of devices) device.bind(topology);
   const equations = new Equations(
