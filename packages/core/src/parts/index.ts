@@ -7,6 +7,7 @@ import { currentSource } from './current-source.ts';
 import { vcvs } from './vcvs.ts';
 import { opamp } from './opamp.ts';
 import { timedSwitch } from './switch.ts';
+import { diode } from './diode.ts';
 
 export type { Device, Binder, Mna, StepInfo, Method, Link } from './device.ts';
 export type { PartKind, PartSpecBase, PinRef, Conditions } from './part-kind.ts';
@@ -21,6 +22,7 @@ export const partKinds: readonly PartKind<any>[] = [
   vcvs,
   opamp,
   timedSwitch,
+  diode,
 ];
 
 /** The kind for a spec's `kind` key. */
