@@ -33,7 +33,7 @@ describe('the public surface of @voltcast/core', () => {
         // op-amp classes
         'opampPresets', 'opampPresetNames', 'OpampParameters', 'OpampPresetName',
         // extension protocols
-        'partKinds', 'PartKind', 'PartSpecBase', 'PinRef', 'Conditions', 'Device', 'Binder', 'Mna', 'StepInfo', 'Method', 'Link', 'TolerableValue',
+        'partKinds', 'PartKind', 'PartSpecBase', 'PinRef', 'Conditions', 'Device', 'Binder', 'Mna', 'StepInfo', 'Method', 'Link', 'OpenPin', 'TolerableValue',
         'waveKinds', 'Wave', 'WaveKind', 'ValueReader', 'MapReader', 'ReadContext', 'NumberLimits',
       ].sort(),
     );

@@ -1,9 +1,10 @@
 import type { Device } from '../parts/device.ts';
 import { partKind } from '../parts/index.ts';
-import type { Circuit } from './circuit.ts';
+import type { PartSpecBase } from '../parts/part-kind.ts';
+import type { SimulateSettings } from './circuit.ts';
 
-/** The devices of a circuit's parts, in part order, under the run's conditions. */
-export function createDevices(circuit: Circuit): Device[] {
-  const conditions = { temperature: circuit.simulate.temperature };
-  return circuit.parts.map((spec) => partKind(spec.kind).create(spec, conditions));
+/** The devices of parts, in order, under the conditions a run's settings put them in. */
+export function createDevices(parts: readonly PartSpecBase[], settings: Pick<SimulateSettings, 'temperature'>): Device[] {
+  const conditions = { temperature: settings.temperature };
+  return parts.map((spec) => partKind(spec.kind).create(spec, conditions));
 }

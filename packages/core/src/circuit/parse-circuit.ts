@@ -8,6 +8,7 @@ import { syntaxIssues } from '../reading/yaml-syntax.ts';
 import { selectKind } from '../reading/select-kind.ts';
 import { readTolerances } from './read-tolerance.ts';
 import { checkConnections, nodesInOrder } from './connections.ts';
+import { checkOpenPins } from './open-pins.ts';
 import { suggestion } from '../reading/suggest.ts';
 import { partKinds } from '../parts/index.ts';
 import { readAdcSection } from './read-adc.ts';
@@ -92,6 +93,8 @@ function readDocument(tree: YamlNode, sink: IssueSink, context: ReadContext, sta
   // A node an ADC reads is used on purpose, as a recorded one is.
   const watched = [...(recordValue === undefined ? [] : recorded), ...adc.adcs.flatMap((a) => a.input)];
   if (parts.complete) checkConnections(parts.specs, watched, top.get('parts'), sink);
+  // The devices behind this check need every part read without error.
+  if (parts.complete && !sink.issues.some((issue) => issue.severity === 'error')) checkOpenPins(specs, simulate, sink);
 
   if (sink.issues.some((issue) => issue.severity === 'error')) return { issues: sink.issues };
   return { circuit: { name, parts: specs, simulate, recorded, nodes, adcs: adc.adcs }, issues: sink.issues };

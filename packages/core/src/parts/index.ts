@@ -8,8 +8,9 @@ import { vcvs } from './vcvs.ts';
 import { opamp } from './opamp.ts';
 import { timedSwitch } from './switch.ts';
 import { diode } from './diode.ts';
+import { comparator } from './comparator.ts';
 
-export type { Device, Binder, Mna, StepInfo, Method, Link } from './device.ts';
+export type { Device, Binder, Mna, StepInfo, Method, Link, OpenPin } from './device.ts';
 export type { PartKind, PartSpecBase, PinRef, Conditions } from './part-kind.ts';
 
 /** Every part kind, by its YAML key. Adding a kind: one file and one line here. */
@@ -23,6 +24,7 @@ export const partKinds: readonly PartKind<any>[] = [
   opamp,
   timedSwitch,
   diode,
+  comparator,
 ];
 
 /** The kind for a spec's `kind` key. */

@@ -1,7 +1,6 @@
 import type { MapReader, ValueReader } from '../reading/reader.ts';
 import { quantities } from '../units/quantity.ts';
-import type { PinRef } from './part-kind.ts';
-import { pinRef } from './pins.ts';
+import { readNamedPins } from './pins.ts';
 import { opampPresetNames, opampPresets, type OpampParameters, type OpampPresetName } from './opamp-presets.ts';
 import type { OpampSpec } from './opamp-spec.ts';
 import { readSupply } from './supply.ts';
@@ -13,11 +12,7 @@ import { readPresetOrMap } from './preset.ts';
  */
 export function readOpamp(name: string, main: ValueReader, options: MapReader): OpampSpec {
   const { preset, parameters } = readParameters(main);
-  const pins: PinRef[] = [];
-  for (const pin of ['plus', 'minus', 'out'] as const) {
-    const v = options.need(pin, `write \`${pin}: <node>\``);
-    if (v !== undefined) pins.push(pinRef(pin, v));
-  }
+  const pins = readNamedPins(options, ['plus', 'minus', 'out']);
   const supply = readSupply(options, preset !== 'ideal', pins);
   return { kind: 'opamp', name, preset, parameters, pins, ...(supply ? { supply } : {}) };
 }

@@ -42,7 +42,7 @@ export function simulate(circuit: Circuit, options: SimulateOptions = {}): Trans
     minStep: Infinity,
     maxStep: 0,
   };
-  const devices = createDevices(circuit);
+  const devices = createDevices(circuit.parts, settings);
   const topology = new Topology(circuit.nodes);
   for (const device of devices) device.bind(topology);
   const equations = new Equations(
@@ -164,10 +164,9 @@ export function simulate(circuit: Circuit, options: SimulateOptions = {}): Trans
     if (event || t >= corner - eps) {
       error.restart(t, x);
       sinceCorner = 0;
-      if (t >= corner - eps) {
-        corner = equations.nextCorner(t + eps);
-        equations.cornerPassed();
-      }
+      if (t >= corner - eps) equations.cornerPassed();
+      // An event may schedule corners of its own (a comparator's delayed edge).
+      corner = equations.nextCorner(t + eps);
     } else {
       error.push(t, x);
     }
