@@ -90,8 +90,8 @@ function readDocument(tree: YamlNode, sink: IssueSink, context: ReadContext, sta
   const nodes = nodesInOrder(specs);
   const recorded = recordValue === undefined ? nodes : readRecord(recordValue, nodes);
   // With a part unread its pins are unknown, and the connection checks would only mislead.
-  // A node an ADC reads is used on purpose, as a recorded one is.
-  const watched = [...(recordValue === undefined ? [] : recorded), ...adc.adcs.flatMap((a) => a.input)];
+  // A node an ADC reads (its input, a reference) is used on purpose, as a recorded one is.
+  const watched = [...(recordValue === undefined ? [] : recorded), ...adc.adcs.flatMap((a) => [...a.input, a.low, a.high].filter((n) => typeof n === 'string'))];
   if (parts.complete) checkConnections(parts.specs, watched, top.get('parts'), sink);
   // The devices behind this check need every part read without error.
   if (parts.complete && !sink.issues.some((issue) => issue.severity === 'error')) checkOpenPins(specs, simulate, sink);
