@@ -1,4 +1,5 @@
 import { quantities } from '../units/quantity.ts';
+import { formatSI } from '../units/format.ts';
 import type { Wave, WaveKind } from './wave.ts';
 
 /**
@@ -52,7 +53,7 @@ export const fm: WaveKind = {
     const amplitude = keys.need('amplitude', example)?.number(quantity) ?? NaN;
     const offset = keys.numberOr('offset', quantity, 0);
     const phase = keys.numberOr('phase', quantities.angle, 0);
-    if (deviation >= carrier) deviationValue?.fail(`the deviation (${deviation} Hz) must be below the carrier (${carrier} Hz)`, 'the instantaneous frequency, carrier ± deviation, must stay above 0');
+    if (deviation >= carrier) deviationValue?.fail(`the deviation (${formatSI(deviation, 'Hz')}) must be below the carrier (${formatSI(carrier, 'Hz')})`, 'the instantaneous frequency, carrier ± deviation, must stay above 0');
     keys.finish();
     return new FmWave(carrier, deviation, rate, amplitude, offset, phase);
   },
