@@ -10,6 +10,7 @@ const fixtures = [
   { file: 'demo-strain-front-end.yaml', recorded: ['beam', 'amp', 'adc'], duration: 24e-3, outputStep: 10e-6, files: ['adc-TRAY.csv'] },
   { file: 'supply-ringing.yaml', recorded: ['feed', 'rail'], duration: 500e-6, outputStep: 500e-9, files: [] },
   { file: 'sensor-cable-rl.yaml', recorded: ['drive', 'sensor'], duration: 100e-6, outputStep: 100e-9, files: [] },
+  { file: 'adc-clamp-overdrive.yaml', recorded: ['probe', 'pin'], duration: 16e-3, outputStep: 5e-6, files: ['adc-MCU.csv'] },
 ];
 
 let scratch: string;

@@ -56,13 +56,18 @@ function writeCsv(path: string, { index, time, volts, code }: AdcReadout): void 
   }
 }
 
+/** A range end: volts, or the node a ratiometric converter follows. */
+function rangeEnd(end: number | string): string {
+  return typeof end === 'number' ? formatSI(end, 'V') : `v(${end})`;
+}
+
 /** One line describing the converter, for the header comment and the JSON. */
 function describe(readout: AdcReadout): string {
   const { spec, code, time } = readout;
   const every = 'rate' in spec.times ? `sampled every ${formatSI(1 / spec.times.rate, 's')}` : 'sampled at listed times';
   const averaged = spec.average > 1 ? `, each the average of ${spec.average} samples` : '';
   const span = code.length > 0 ? ` from ${formatSI(time[0], 's')} to ${formatSI(time[code.length - 1], 's')}` : '';
-  return `${spec.bits} bits, ${formatSI(spec.low, 'V')} to ${formatSI(spec.high, 'V')}, ${spec.coding}; ${code.length} codes${span}, ${every}${averaged}`;
+  return `${spec.bits} bits, ${rangeEnd(spec.low)} to ${rangeEnd(spec.high)}, ${spec.coding}; ${code.length} codes${span}, ${every}${averaged}`;
 }
 
 /**

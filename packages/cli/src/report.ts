@@ -70,6 +70,7 @@ export function reportText(report: RunReport): string {
       ['accuracy, relative', String(settings.accuracy.relative)],
       ['accuracy, volts', formatSI(settings.accuracy.volts, 'V')],
       ['accuracy, amps', formatSI(settings.accuracy.amps, 'A')],
+      ['temperature', `${settings.temperature} °C`],
     ]),
     '',
     'work',

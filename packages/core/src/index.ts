@@ -62,7 +62,7 @@ export type { OpampParameters, OpampPresetName } from './parts/opamp-presets.ts'
 
 // The protocols a part kind or a wave implements (see DEVELOPERS.md), and the built-in ones.
 export { partKinds } from './parts/index.ts';
-export type { PartKind, PartSpecBase, PinRef, Device, Binder, Mna, ComplexMna, GainStage, StepInfo, Method, Link } from './parts/index.ts';
+export type { PartKind, PartSpecBase, PinRef, Conditions, Device, Binder, Mna, ComplexMna, GainStage, StepInfo, Method, Link, OpenPin } from './parts/index.ts';
 export type { TolerableValue } from './parts/tolerance.ts';
 export { waveKinds } from './waves/index.ts';
 export type { Wave, WaveKind } from './waves/wave.ts';

@@ -44,11 +44,12 @@ describe('a valid circuit', () => {
       maxStep: 10e-6,
       fixedStep: undefined,
       accuracy: { relative: 1e-4, volts: 1e-6, amps: 1e-9 },
+      temperature: 25,
     });
   });
 
   it('takes every simulate key and explicit record', () => {
-    const text = `${filter}  output-step: 20u\n  max-step: 1u\n  fixed-step: 100n\n  accuracy: { relative: 0.1%, amps: 1p }\nrecord: [out]\n`;
+    const text = `${filter}  output-step: 20u\n  max-step: 1u\n  fixed-step: 100n\n  accuracy: { relative: 0.1%, amps: 1p }\n  temperature: 85°C\nrecord: [out]\n`;
     const circuit = parseCircuit(text);
     expect(circuit.simulate).toEqual({
       duration: 10e-3,
@@ -56,6 +57,7 @@ describe('a valid circuit', () => {
       maxStep: 1e-6,
       fixedStep: 100e-9,
       accuracy: { relative: 1e-3, volts: 1e-6, amps: 1e-12 },
+      temperature: 85,
     });
     expect(circuit.recorded).toEqual(['out']);
   });

@@ -36,7 +36,7 @@ describe('the public surface of @voltcast/core', () => {
         // op-amp classes
         'opampPresets', 'opampPresetNames', 'OpampParameters', 'OpampPresetName',
         // extension protocols
-        'partKinds', 'PartKind', 'PartSpecBase', 'PinRef', 'Device', 'Binder', 'Mna', 'ComplexMna', 'GainStage', 'StepInfo', 'Method', 'Link', 'TolerableValue',
+        'partKinds', 'PartKind', 'PartSpecBase', 'PinRef', 'Conditions', 'Device', 'Binder', 'Mna', 'ComplexMna', 'GainStage', 'StepInfo', 'Method', 'Link', 'OpenPin', 'TolerableValue',
         'waveKinds', 'Wave', 'WaveKind', 'ValueReader', 'MapReader', 'ReadContext', 'NumberLimits',
       ].sort(),
     );

@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import FFT from 'fft.js';
 import { readStimulus } from '../src/waves/index.ts';
 import { IssueSink, YamlValue } from '../src/reading/yaml-reader.ts';
 import { LineIndex, parseYamlTree } from '../src/reading/yaml-tree.ts';
@@ -235,5 +236,169 @@ describe('readStimulus', () => {
     expect(read('{ sine: { amplitude: 1, frequency: 1k }, triangle: { high: 1, frequency: 1k } }').messages[0]).toMatch(/a wave has 2 kind keys \(sine, triangle\)/);
     expect(read('[1, 2]').messages[0]).toMatch(/expected a voltage or a wave, found a list/);
     expect(read('{ points: [[0, 0]], period: 1m }').messages[0]).toMatch(/unknown key 'period'/);
+  });
+});
+
+/**
+ * Rising zero crossings of wave − offset on [0, until], each located by bisection between
+ * samples `dt` apart.
+ */
+function risingZeros(wave: { value(t: number): number }, offset: number, until: number, dt: number): number[] {
+  const f = (t: number) => wave.value(t) - offset;
+  const zeros: number[] = [];
+  for (let t = 0; t + dt <= until; t += dt) {
+    if (!(f(t) < 0 && f(t + dt) >= 0)) continue;
+    let lo = t;
+    let hi = t + dt;
+    for (let i = 0; i < 60; i++) {
+      const mid = (lo + hi) / 2;
+      if (f(mid) < 0) lo = mid;
+      else hi = mid;
+    }
+    zeros.push((lo + hi) / 2);
+  }
+  return zeros;
+}
+
+/** Largest relative difference between 1/period of consecutive rising zeros and `frequency` at the period's middle. */
+function worstFrequencyError(zeros: readonly number[], frequency: (t: number) => number): number {
+  let worst = 0;
+  for (let i = 1; i < zeros.length; i++) {
+    const measured = 1 / (zeros[i] - zeros[i - 1]);
+    const expected = frequency((zeros[i] + zeros[i - 1]) / 2);
+    worst = Math.max(worst, Math.abs(measured / expected - 1));
+  }
+  return worst;
+}
+
+describe('fm', () => {
+  const wave = good('{ fm: { carrier: 10k, deviation: 2k, rate: 200, amplitude: 2, offset: 1 } }');
+
+  it('has the instantaneous frequency carrier + deviation·sin(2π·rate·t), from its zero crossings, within 1%', () => {
+    // Instantaneous frequency as the phase's derivative over 2π (communications textbooks).
+    const zeros = risingZeros(wave, 1, 10e-3, 2e-6);
+    expect(zeros.length).toBeGreaterThan(95);
+    expect(worstFrequencyError(zeros, (t) => 10e3 + 2e3 * Math.sin(2 * Math.PI * 200 * t))).toBeLessThan(0.01);
+  });
+
+  it('swings between offset ± amplitude, starts at offset + amplitude·sin(phase), and has no corners', () => {
+    expect(wave.value(0)).toBe(1);
+    expect(good('{ fm: { carrier: 10k, deviation: 2k, rate: 200, amplitude: 2, phase: 90 } }').value(0)).toBeCloseTo(2, 12);
+    let low = Infinity;
+    let high = -Infinity;
+    for (let t = 0; t < 5e-3; t += 1e-7) {
+      low = Math.min(low, wave.value(t));
+      high = Math.max(high, wave.value(t));
+    }
+    expect(low).toBeCloseTo(-1, 3);
+    expect(high).toBeCloseTo(3, 3);
+    expect(wave.nextCorner(0)).toBe(Infinity);
+  });
+
+  it('requires its keys and a deviation below the carrier', () => {
+    expect(read('{ fm: { carrier: 1k, deviation: 1k, rate: 10, amplitude: 1 } }').messages).toEqual(['w.yaml:1:33: error: the deviation (1 kHz) must be below the carrier (1 kHz) at voltage.fm.deviation\n  the instantaneous frequency, carrier ± deviation, must stay above 0']);
+    expect(read('{ fm: { carrier: 1k, amplitude: 1 } }').messages.map((m) => m.split('\n')[0])).toEqual([
+      "w.yaml:1:7: error: missing key 'deviation' at voltage.fm.deviation",
+      "w.yaml:1:7: error: missing key 'rate' at voltage.fm.rate",
+    ]);
+  });
+});
+
+describe('chirp', () => {
+  it('sweeps linearly: f(t) = from + (to − from)·t/duration, from its zero crossings, within 1%', () => {
+    const wave = good('{ chirp: { from: 1k, to: 5k, duration: 20m, amplitude: 1 } }');
+    // Linear chirp: the phase 2π·(f0·t + k·t²/2) has the instantaneous frequency f0 + k·t (signal-processing textbooks).
+    const zeros = risingZeros(wave, 0, 20e-3, 2e-6);
+    expect(worstFrequencyError(zeros, (t) => 1e3 + (4e3 * t) / 20e-3)).toBeLessThan(0.01);
+  });
+
+  it('sweeps exponentially with shape log: f(t) = from·(to/from)^(t/duration), within 1%', () => {
+    const wave = good('{ chirp: { from: 100, to: 10k, duration: 50m, amplitude: 1, shape: log } }');
+    // Exponential chirp: phase 2π·f0·T·(k^(t/T) − 1)/ln k, instantaneous frequency f0·k^(t/T) (signal-processing textbooks).
+    const zeros = risingZeros(wave, 0, 50e-3, 1e-6);
+    expect(worstFrequencyError(zeros, (t) => 100 * Math.pow(100, t / 50e-3))).toBeLessThan(0.01);
+  });
+
+  it('keeps the final frequency after the sweep, with its phase continuous', () => {
+    const wave = good('{ chirp: { from: 1k, to: 2k, duration: 10m, amplitude: 1, offset: 0.5 } }');
+    const zeros = risingZeros(wave, 0.5, 30e-3, 2e-6).filter((t) => t > 11e-3);
+    expect(worstFrequencyError(zeros, () => 2e3)).toBeLessThan(1e-6);
+    // Continuous across the end of the sweep: the value moves by at most its slope over 2 ns.
+    expect(Math.abs(wave.value(10e-3 + 1e-9) - wave.value(10e-3 - 1e-9))).toBeLessThan(2 * Math.PI * 2e3 * 2e-9 * 1.01);
+    expect(wave.nextCorner(0)).toBe(Infinity);
+  });
+});
+
+describe('sum', () => {
+  const wave = good('{ sum: [1.5, { sine: { amplitude: 1, frequency: 1k } }, { square: { high: 2, frequency: 250, edge: 10u } }, { points: [[0, 0], [3m, 1]] }] }');
+
+  it('adds its members at every instant', () => {
+    for (const t of [0, 0.1e-3, 0.37e-3, 1.9e-3, 2.5e-3, 4e-3]) {
+      const square = good('{ square: { high: 2, frequency: 250, edge: 10u } }').value(t);
+      expect(wave.value(t)).toBeCloseTo(1.5 + Math.sin(2 * Math.PI * 1e3 * t) + square + Math.min(t / 3e-3, 1), 12);
+    }
+  });
+
+  it('has the union of its members’ corners, exactly', () => {
+    // Square at 250 Hz: edges at 0, 10 µs, 2 ms, 2.01 ms per 4 ms period; points: 3 ms.
+    expect(corners(wave, 7)).toEqual([10e-6, 2e-3, 2e-3 + 10e-6, 3e-3, 4e-3, 4e-3 + 10e-6, 6e-3]);
+  });
+
+  it('needs at least one member, and reads each member where it is written', () => {
+    expect(read('{ sum: [] }').messages[0]).toMatch(/a sum needs at least one member/);
+    expect(read('{ sum: [1, { sine: { amplitude: 1 } }] }').messages[0]).toBe("w.yaml:1:20: error: missing key 'frequency' at voltage.sum.1.sine.frequency\n  write sine: { amplitude: 1, frequency: 1k }");
+  });
+});
+
+describe('noise', () => {
+  const text = '{ noise: { rms: 50m, bandwidth: 10k, seed: 7 } }';
+
+  it('is a pure function of time: the same seed gives the same values in any order of evaluation', () => {
+    const a = good(text);
+    const b = good(text);
+    const times = [3e-3, 1e-6, 0.5, 2e-3, 1e-6];
+    const forward = times.map((t) => a.value(t));
+    const backward = [...times].reverse().map((t) => b.value(t)).reverse();
+    expect(forward).toEqual(backward);
+    expect(forward[1]).toBe(forward[4]);
+    expect(good('{ noise: { rms: 50m, bandwidth: 10k, seed: 8 } }').value(3e-3)).not.toBe(forward[0]);
+  });
+
+  it('has the stated rms, a Gaussian spread, and no power above its bandwidth', () => {
+    const wave = good(text);
+    const n = 1 << 16;
+    const dt = 1 / 80e3; // 40 kHz Nyquist: room to see anything above 10 kHz
+    const samples = new Float64Array(n);
+    for (let i = 0; i < n; i++) samples[i] = wave.value(i * dt);
+    let sumSquares = 0;
+    let sumFourth = 0;
+    for (const v of samples) {
+      sumSquares += v * v;
+      sumFourth += v ** 4;
+    }
+    const rms = Math.sqrt(sumSquares / n);
+    expect(rms).toBeGreaterThan(0.05 * 0.95);
+    expect(rms).toBeLessThan(0.05 * 1.05);
+    // A Gaussian's kurtosis is 3 (any statistics textbook).
+    expect(sumFourth / n / rms ** 4).toBeCloseTo(3, 0);
+    // Power spectrum by fft.js: everything below the bandwidth, apart from the window's leakage.
+    const fft = new FFT(n);
+    const spectrum = fft.createComplexArray();
+    const windowed = Array.from(samples, (v, i) => v * (0.5 - 0.5 * Math.cos((2 * Math.PI * i) / n)));
+    fft.realTransform(spectrum, windowed);
+    let inside = 0;
+    let above = 0;
+    for (let k = 1; k < n / 2; k++) {
+      const power = spectrum[2 * k] ** 2 + spectrum[2 * k + 1] ** 2;
+      if (k / (n * dt) <= 10e3) inside += power;
+      else if (k / (n * dt) > 10.1e3) above += power;
+    }
+    expect(above / inside).toBeLessThan(1e-6);
+  });
+
+  it('has no corners and checks its keys', () => {
+    expect(good(text).nextCorner(0)).toBe(Infinity);
+    expect(read('{ noise: { rms: 1m } }').messages[0]).toMatch(/missing key 'bandwidth'/);
+    expect(read('{ noise: { rms: 1m, bandwidth: 1k, seed: 1.5 } }').messages[0]).toMatch(/seed/);
   });
 });

@@ -26,8 +26,12 @@ export interface AdcSpec {
   /** Nodes whose difference is converted: the input, or the sampling capacitor with `sampling`. */
   readonly held: readonly [string, string];
   readonly bits: number;
-  readonly low: number;
-  readonly high: number;
+  /**
+   * The input volts of code 0 and of full scale: a number, or a node's name (a ratiometric
+   * converter whose reference is that node): its voltage at each sample instant.
+   */
+  readonly low: number | string;
+  readonly high: number | string;
   readonly times: SampleTimes;
   readonly rounding: AdcRounding;
   readonly coding: AdcCoding;

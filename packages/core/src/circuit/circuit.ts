@@ -13,6 +13,8 @@ export interface SimulateSettings {
   readonly fixedStep?: number;
   /** How closely each step follows the exact solution. */
   readonly accuracy: Accuracy;
+  /** Temperature of every part, °C (diode junctions, noise). */
+  readonly temperature: number;
 }
 
 /** `simulate: accuracy:`: the tolerances of the local truncation error per step. */
@@ -57,4 +59,6 @@ export const simulateDefaults = {
   /** Output rows when `output-step` is absent: duration / 1000. */
   rowsWhenUnset: 1000,
   accuracy: { relative: 1e-4, volts: 1e-6, amps: 1e-9 },
+  /** °C: the temperature data sheets state typical figures at. */
+  temperature: 25,
 } as const;

@@ -8,6 +8,7 @@ import { syntaxIssues } from '../reading/yaml-syntax.ts';
 import { selectKind } from '../reading/select-kind.ts';
 import { readTolerances } from './read-tolerance.ts';
 import { checkConnections, nodesInOrder } from './connections.ts';
+import { checkOpenPins } from './open-pins.ts';
 import { suggestion } from '../reading/suggest.ts';
 import { partKinds } from '../parts/index.ts';
 import { readAdcSection } from './read-adc.ts';
@@ -15,6 +16,7 @@ import { readResponseSection } from './read-response.ts';
 import type { PartSpecBase } from '../parts/part-kind.ts';
 import { quantities } from '../units/quantity.ts';
 import { formatSI } from '../units/format.ts';
+import { ZERO_CELSIUS } from '../units/constants.ts';
 
 export interface ParseOptions extends ReadContext {
   /** Shown in error messages (`file:line:column`). */
@@ -90,9 +92,11 @@ function readDocument(tree: YamlNode, sink: IssueSink, context: ReadContext, sta
   const nodes = nodesInOrder(specs);
   const recorded = recordValue === undefined ? nodes : readRecord(recordValue, nodes);
   // With a part unread its pins are unknown, and the connection checks would only mislead.
-  // A node an ADC reads is used on purpose, as a recorded one is.
-  const watched = [...(recordValue === undefined ? [] : recorded), ...adc.adcs.flatMap((a) => a.input)];
+  // A node an ADC reads (its input, a reference) is used on purpose, as a recorded one is.
+  const watched = [...(recordValue === undefined ? [] : recorded), ...adc.adcs.flatMap((a) => [...a.input, a.low, a.high].filter((n) => typeof n === 'string'))];
   if (parts.complete) checkConnections(parts.specs, watched, top.get('parts'), sink);
+  // The devices behind this check need every part read without error.
+  if (parts.complete && !sink.issues.some((issue) => issue.severity === 'error')) checkOpenPins(specs, simulate, sink);
 
   if (sink.issues.some((issue) => issue.severity === 'error')) return { issues: sink.issues };
   const circuit: Circuit = { name, parts: specs, simulate, recorded, nodes, adcs: adc.adcs, ...(response !== undefined ? { response } : {}) };
@@ -152,6 +156,8 @@ function readSimulate(value: ValueReader | undefined): SimulateSettings {
     maxStep: keys?.numberOr('max-step', time, outputStep, positive) ?? NaN,
     fixedStep,
     accuracy: readAccuracy(keys?.get('accuracy')),
+    // Above absolute zero; beyond the range parts are rated for the models mean little, but that is the user's call.
+    temperature: keys?.numberOr('temperature', quantities.temperature, simulateDefaults.temperature, { above: -ZERO_CELSIUS }) ?? NaN,
   };
   keys?.finish();
   return settings;

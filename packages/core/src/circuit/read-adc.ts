@@ -4,6 +4,7 @@ import type { PartSpecBase } from '../parts/part-kind.ts';
 import { quantities } from '../units/quantity.ts';
 import type { Quantity } from '../units/quantity.ts';
 import { formatSI } from '../units/format.ts';
+import { parseQuantity } from '../units/si.ts';
 import { checkTimes } from '../waves/points.ts';
 import type { AdcSpec, SampleTimes, SamplingSpec } from './adc-spec.ts';
 import { samplingParts } from './adc-sampling-parts.ts';
@@ -53,7 +54,7 @@ function readAdc(name: string, value: ValueReader, nodes: readonly string[], dur
   const m = value.map();
   const input = readInput(m.need('input', 'write `input: out`, or `input: [p, n]` for a differential input'), nodes);
   const bits = m.need('bits', 'write `bits: 12`')?.number(quantities.count, { min: 1, max: 24, integer: true }) ?? NaN;
-  const [low, high] = readRange(m.need('range', 'write `range: [0, 3.3]`, the input volts of code 0 and of full scale'));
+  const [low, high] = readRange(m.need('range', 'write `range: [0, 3.3]`, the input volts of code 0 and of full scale'), nodes);
   const times = readTimes(m, duration);
   const spec: AdcSpec = {
     name,
@@ -100,14 +101,22 @@ function readInput(value: ValueReader | undefined, nodes: readonly string[]): [s
   return [p, n];
 }
 
-function readRange(value: ValueReader | undefined): [number, number] {
+/** `range: [low, high]`: volts, or node names for a ratiometric converter. */
+function readRange(value: ValueReader | undefined, nodes: readonly string[]): [number | string, number | string] {
   const items = value?.list() ?? [];
   if (value === undefined || (value.kind() === 'list' && items.length !== 2)) {
-    value?.fail(`range needs two voltages, [low, high], found ${items.length}`, 'write `range: [0, 3.3]` or `range: [-5, 5]`');
+    value?.fail(`range needs two voltages or node names, [low, high], found ${items.length}`, 'write `range: [0, 3.3]`, `range: [-5, 5]` or, for a reference that is a node, `range: [gnd, vref]`');
     return [NaN, NaN];
   }
-  const [low, high] = items.map((item) => item.number(quantities.voltage));
-  if (items.length === 2 && !(high > low)) value.fail(`the range's high end (${high} V) must be above its low end (${low} V)`, 'write `range: [low, high]`');
+  const [low, high] = items.map((item): number | string => {
+    const text = item.node();
+    const volts = parseQuantity(text, quantities.voltage);
+    if ('value' in volts) return volts.value;
+    if (text === 'gnd') return 0;
+    if (text !== '' && !nodes.includes(text)) item.fail(`range: '${text}' is neither a voltage nor a node of this circuit`, suggestion(text, nodes, 'nodes'));
+    return text;
+  });
+  if (typeof low === 'number' && typeof high === 'number' && items.length === 2 && !(high > low)) value.fail(`the range's high end (${high} V) must be above its low end (${low} V)`, 'write `range: [low, high]`');
   return [low, high];
 }
 

@@ -58,6 +58,11 @@ export interface Device {
   /** How the device connects its pins, for diagnosing a singular matrix by cause. */
   links(): readonly Link[];
   /**
+   * Pins the device leaves without a DC path at times (an open-drain output that is off):
+   * reading a circuit checks that another part gives each of them one.
+   */
+  openPins?(): readonly OpenPin[];
+  /**
    * Unknowns whose local truncation error the step control watches besides node voltages
    * (inductor currents).
    */
@@ -79,6 +84,13 @@ export interface Link {
   readonly a: number;
   readonly b: number;
   readonly kind: 'conductive' | 'voltage' | 'none';
+}
+
+/** A pin that needs a DC path through another part, with why and what to do, for the message. */
+export interface OpenPin {
+  readonly pin: string;
+  readonly why: string;
+  readonly hint: string;
 }
 
 export type Method = 'dc' | 'be' | 'trap';

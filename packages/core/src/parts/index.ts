@@ -7,9 +7,11 @@ import { currentSource } from './current-source.ts';
 import { vcvs } from './vcvs.ts';
 import { opamp } from './opamp.ts';
 import { timedSwitch } from './switch.ts';
+import { diode } from './diode.ts';
+import { comparator } from './comparator.ts';
 
-export type { Device, Binder, Mna, ComplexMna, GainStage, StepInfo, Method, Link } from './device.ts';
-export type { PartKind, PartSpecBase, PinRef } from './part-kind.ts';
+export type { Device, Binder, Mna, ComplexMna, GainStage, StepInfo, Method, Link, OpenPin } from './device.ts';
+export type { PartKind, PartSpecBase, PinRef, Conditions } from './part-kind.ts';
 
 /** Every part kind, by its YAML key. Adding a kind: one file and one line here. */
 export const partKinds: readonly PartKind<any>[] = [
@@ -21,6 +23,8 @@ export const partKinds: readonly PartKind<any>[] = [
   vcvs,
   opamp,
   timedSwitch,
+  diode,
+  comparator,
 ];
 
 /** The kind for a spec's `kind` key. */

@@ -1,11 +1,10 @@
 import type { MapReader, ValueReader } from '../reading/reader.ts';
-import { suggestion } from '../reading/suggest.ts';
-import { parseQuantity } from '../units/si.ts';
 import { quantities } from '../units/quantity.ts';
-import type { PinRef } from './part-kind.ts';
-import { pinRef } from './pins.ts';
+import { readNamedPins } from './pins.ts';
 import { opampPresetNames, opampPresets, type OpampParameters, type OpampPresetName } from './opamp-presets.ts';
-import type { OpampSpec, Supply } from './opamp-spec.ts';
+import type { OpampSpec } from './opamp-spec.ts';
+import { readSupply } from './supply.ts';
+import { readPresetOrMap } from './preset.ts';
 
 /**
  * Read an op-amp part: `opamp: general-purpose` or `opamp: { preset: jfet-input, gbw: 5MHz,
@@ -13,23 +12,14 @@ import type { OpampSpec, Supply } from './opamp-spec.ts';
  */
 export function readOpamp(name: string, main: ValueReader, options: MapReader): OpampSpec {
   const { preset, parameters } = readParameters(main);
-  const pins: PinRef[] = [];
-  for (const pin of ['plus', 'minus', 'out'] as const) {
-    const v = options.need(pin, `write \`${pin}: <node>\``);
-    if (v !== undefined) pins.push(pinRef(pin, v));
-  }
-  const supply = readSupply(options, preset, pins);
+  const pins = readNamedPins(options, ['plus', 'minus', 'out']);
+  const supply = readSupply(options, preset !== 'ideal', pins);
   return { kind: 'opamp', name, preset, parameters, pins, ...(supply ? { supply } : {}) };
 }
 
 function readParameters(main: ValueReader): { preset: OpampPresetName; parameters: OpampParameters } {
-  if (main.kind() !== 'map') {
-    const preset = readPreset(main);
-    return { preset, parameters: opampPresets[preset] };
-  }
-  const m = main.map();
-  const presetValue = m.need('preset', `name a class: ${opampPresetNames.join(', ')}`);
-  const preset = presetValue ? readPreset(presetValue) : 'general-purpose';
+  const { preset, overrides: m } = readPresetOrMap(main, opampPresetNames, 'op-amp', 'general-purpose', true);
+  if (m === undefined) return { preset, parameters: opampPresets[preset] };
   const base: OpampParameters = opampPresets[preset];
   const parameters: OpampParameters = {
     gain: m.numberOr('gain', quantities.gain, base.gain, { above: 1 }),
@@ -47,13 +37,6 @@ function readParameters(main: ValueReader): { preset: OpampPresetName; parameter
   }
   m.finish();
   return { preset, parameters };
-}
-
-function readPreset(value: ValueReader): OpampPresetName {
-  const text = value.kind() === 'scalar' ? value.text() : '';
-  if ((opampPresetNames as string[]).includes(text)) return text as OpampPresetName;
-  value.fail(`'${text}' is not an op-amp class`, suggestion(text, opampPresetNames, 'op-amp classes'));
-  return 'general-purpose';
 }
 
 function readHeadroom(m: MapReader, fallback: readonly [number, number]): readonly [number, number] {
@@ -75,24 +58,4 @@ function optional<K extends string>(m: MapReader, key: string, field: K, q: type
   const v = m.get(key);
   const value = v !== undefined ? v.number(q, { above: 0 }) : fallback;
   return value === undefined ? {} : ({ [field]: value } as Record<K, number>);
-}
-
-function readSupply(options: MapReader, preset: OpampPresetName, pins: PinRef[]): readonly [Supply, Supply] | undefined {
-  const v = preset === 'ideal' ? options.get('supply') : options.need('supply', 'write `supply: [-12, 12]` with volts or node names');
-  if (v === undefined) return undefined;
-  const items = v.list();
-  if (items.length !== 2) {
-    v.fail('`supply` needs two entries, [low, high]', 'write `supply: [-12, 12]` or `supply: [vee, vcc]`');
-    return undefined;
-  }
-  const rails = items.map((item, i): Supply => {
-    const text = item.node();
-    const parsed = parseQuantity(text, quantities.voltage);
-    if ('value' in parsed) return { volts: parsed.value };
-    pins.push(pinRef(i === 0 ? 'supply-low' : 'supply-high', item));
-    return { node: text };
-  });
-  const [low, high] = rails;
-  if ('volts' in low && 'volts' in high && !(high.volts > low.volts)) v.fail(`the high supply (${high.volts} V) must be above the low one (${low.volts} V)`, 'write `supply: [low, high]`');
-  return [low, high];
 }

@@ -1,8 +1,8 @@
 import type { PartSpecBase } from './part-kind.ts';
 import type { OpampParameters, OpampPresetName } from './opamp-presets.ts';
+import type { Supply } from './supply.ts';
 
-/** A supply rail: a fixed voltage, or a node whose voltage the clamp follows. */
-export type Supply = { readonly volts: number } | { readonly node: string };
+export type { Supply } from './supply.ts';
 
 export interface OpampSpec extends PartSpecBase {
   readonly kind: 'opamp';

@@ -19,6 +19,12 @@ export interface PartSpecBase {
   readonly tolerances?: readonly Tolerance[];
 }
 
+/** The conditions a run puts every part in, besides its own values. */
+export interface Conditions {
+  /** °C (`simulate: temperature`). */
+  readonly temperature: number;
+}
+
 /**
  * A part kind: one YAML key (`resistor`, `capacitor`, ...), how to read it and how to make
  * its device. In a circuit file a part is a map whose kind key's value is `main` (the value,
@@ -30,7 +36,7 @@ export interface PartKind<Spec extends PartSpecBase = PartSpecBase> {
   /** One line for docs and "did you mean" lists. */
   readonly summary: string;
   read(name: string, main: ValueReader, options: MapReader, context: ReadContext): Spec;
-  create(spec: Spec): Device;
+  create(spec: Spec, conditions: Conditions): Device;
   /**
    * Values that `tolerance:` may vary, for envelopes (Monte Carlo and worst-case corners).
    * Absent: the kind has no tolerance. The first entry is the main value when its key is `key`.

@@ -16,6 +16,16 @@ export function readBetween(options: MapReader): PinRef[] {
   return items.map((item, i) => pinRef(i === 0 ? 'a' : 'b', item));
 }
 
+/** Pins written as keys of their own (`plus: in`, `out: vout`), each required. */
+export function readNamedPins(options: MapReader, names: readonly string[]): PinRef[] {
+  const pins: PinRef[] = [];
+  for (const pin of names) {
+    const v = options.need(pin, `write \`${pin}: <node>\``);
+    if (v !== undefined) pins.push(pinRef(pin, v));
+  }
+  return pins;
+}
+
 /** A named pin read from one value (e.g. an op-amp's `out: vout`). */
 export function pinRef(pin: string, value: { node(): string; path: readonly (string | number)[]; position?: { line: number; column: number } }): PinRef {
   return { pin, node: value.node(), path: value.path, position: value.position };

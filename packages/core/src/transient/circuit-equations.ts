@@ -1,6 +1,6 @@
 import type { Circuit } from '../circuit/circuit.ts';
 import type { Device } from '../parts/device.ts';
-import { partKind } from '../parts/index.ts';
+import { createDevices } from '../circuit/devices.ts';
 import { Topology } from '../solver/topology.ts';
 import { Equations, type MatrixStorage } from './equations.ts';
 import type { RunStats } from './result.ts';
@@ -37,7 +37,7 @@ export function newRunStats(): RunStats {
  */
 export function circuitEquations(circuit: Circuit, stats: RunStats, storage?: MatrixStorage): CircuitEquations {
   const settings = circuit.simulate;
-  const devices = circuit.parts.map((spec) => partKind(spec.kind).create(spec));
+  const devices = createDevices(circuit.parts, settings);
   const topology = new Topology(circuit.nodes);
   for (const device of devices) device.bind(topology);
   const equations = new Equations(

@@ -136,10 +136,9 @@ export function simulate(circuit: Circuit, options: SimulateOptions = {}): Trans
     if (event || t >= corner - eps) {
       error.restart(t, x);
       sinceCorner = 0;
-      if (t >= corner - eps) {
-        corner = equations.nextCorner(t + eps);
-        equations.cornerPassed();
-      }
+      if (t >= corner - eps) equations.cornerPassed();
+      // An event may schedule corners of its own (a comparator's delayed edge).
+      corner = equations.nextCorner(t + eps);
     } else {
       error.push(t, x);
     }

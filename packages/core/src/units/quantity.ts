@@ -27,6 +27,8 @@ export const quantities = {
   gain: { name: 'gain', units: ['V/V'], decibels: true },
   fraction: { name: 'fraction', units: [], percent: true },
   angle: { name: 'angle', units: ['°', 'deg'] },
+  /** Degrees Celsius (`simulate: temperature`). */
+  temperature: { name: 'temperature', units: ['°C', 'degC'] },
   /** A pure number (counts, bits); no unit, SI prefixes still allowed. */
   count: { name: 'number', units: [] },
 } as const satisfies Record<string, Quantity>;

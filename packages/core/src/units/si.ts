@@ -20,6 +20,7 @@ const examples: Readonly<Record<string, string>> = {
   gain: '1000 or 100dB',
   fraction: '0.5 or 50%',
   angle: '90 or 90°',
+  temperature: '25 or 85°C',
   number: '12 or 20k',
 };
 

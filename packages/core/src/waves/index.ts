@@ -8,6 +8,10 @@ import { sine } from './sine.ts';
 import { square } from './square.ts';
 import { triangle } from './triangle.ts';
 import { file } from './file.ts';
+import { fm } from './fm.ts';
+import { chirp } from './chirp.ts';
+import { sumOf } from './sum.ts';
+import { noise } from './noise.ts';
 
 export type { Wave, WaveKind } from './wave.ts';
 export { ConstantWave } from './constant.ts';
@@ -17,7 +21,7 @@ export { SquareWave } from './square.ts';
 export { TriangleWave } from './triangle.ts';
 
 /** Every wave kind, by its YAML key. Adding a kind: one file and one line here. */
-export const waveKinds: readonly WaveKind[] = [points, sine, square, triangle, file];
+export const waveKinds: readonly WaveKind[] = [points, sine, square, triangle, file, fm, chirp, sumOf(readStimulus), noise];
 
 /**
  * A source's value: a plain number (`5`, `3.3V`) is a constant; a map selects a wave by its

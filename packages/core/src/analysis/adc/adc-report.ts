@@ -24,7 +24,7 @@ export interface CodeError {
 /** What one converter read over the run, for report.txt and report.json. */
 export interface AdcReport {
   readonly name: string;
-  /** Volts per code. */
+  /** Volts per code; for a ratiometric range (a node's voltage), the mean over the conversions. */
   readonly lsb: number;
   /** Conversions made (samples), and codes reported (samples / average). */
   readonly samples: number;

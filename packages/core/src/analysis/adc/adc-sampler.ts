@@ -6,7 +6,7 @@ import { SampleSchedule } from './sample-schedule.ts';
 import { Transfer } from './transfer.ts';
 import { SeededNoise } from './noise.ts';
 import { encode } from './coding.ts';
-import { across } from '../../parts/solution.ts';
+import { across, valueAt } from '../../parts/solution.ts';
 
 /**
  * One converter watching the run. Its sample instants are landing points of the stepper, so
@@ -36,6 +36,14 @@ export class AdcSampler implements StepObserver {
   private heldMinus = -1;
   private inputPlus = -1;
   private inputMinus = -1;
+  /** Unknowns of the range's ends when they are nodes (-1: a number, or ground). */
+  private lowNode = -1;
+  private highNode = -1;
+  /** Range at the instant being converted, volts. */
+  private low = 0;
+  private high = 0;
+  /** Sum of the LSB of every conversion, for the report's mean LSB. */
+  private sumLsb = 0;
   private next = 0;
   private sumVolts = 0;
   private sumCode = 0;
@@ -66,6 +74,14 @@ export class AdcSampler implements StepObserver {
     this.heldMinus = context.node(this.spec.held[1]);
     this.inputPlus = context.node(this.spec.input[0]);
     this.inputMinus = context.node(this.spec.input[1]);
+    if (typeof this.spec.low === 'string') this.lowNode = context.node(this.spec.low);
+    if (typeof this.spec.high === 'string') this.highNode = context.node(this.spec.high);
+  }
+
+  /** The range's ends at solution x: numbers, or the reference nodes' voltages. */
+  private range(x: Float64Array): void {
+    this.low = typeof this.spec.low === 'number' ? this.spec.low : valueAt(x, this.lowNode);
+    this.high = typeof this.spec.high === 'number' ? this.spec.high : valueAt(x, this.highNode);
   }
 
   /** The next sample instant, or with sampling the opening of its window when still ahead. */
@@ -84,6 +100,7 @@ export class AdcSampler implements StepObserver {
     if (this.acquisition > 0 && this.next < count && Number.isNaN(this.inputBefore) && t >= this.schedule.instant(this.next) - this.acquisition - this.tolerance) {
       this.inputBefore = this.input(x);
     }
+    this.range(x);
     while (this.next < count && this.schedule.instant(this.next) <= t + this.tolerance) this.convert(this.next++, x);
   }
 
@@ -95,12 +112,14 @@ export class AdcSampler implements StepObserver {
     const held = across(x, this.heldPlus, this.heldMinus);
     const input = this.input(x);
     const t = this.transfer;
-    const raw = t.unbounded(held, this.noise.next());
+    const { low, high } = this;
+    const raw = t.unbounded(held, low, high, this.noise.next());
     this.clipped[k] = raw < 0 ? -1 : raw > t.top ? 1 : 0;
     this.sumCode += t.clip(raw);
-    this.sumIdeal += t.clip(t.ideal(input));
+    this.sumIdeal += t.clip(t.ideal(input, low, high));
+    this.sumLsb += t.lsb(low, high);
     // A window that opened before the run (first sample at 0) starts from the operating point.
-    if (this.acquisition > 0) this.sumIdealBefore += t.clip(t.ideal(Number.isNaN(this.inputBefore) ? input : this.inputBefore));
+    if (this.acquisition > 0) this.sumIdealBefore += t.clip(t.ideal(Number.isNaN(this.inputBefore) ? input : this.inputBefore, low, high));
     this.inputBefore = NaN;
     this.sumVolts += held;
     const heldError = Math.abs(held - input);
@@ -135,7 +154,7 @@ export class AdcSampler implements StepObserver {
       code,
       report: {
         name: spec.name,
-        lsb: this.transfer.lsb,
+        lsb: this.reportedLsb(),
         samples: this.clipped.length,
         codes: rows,
         ...(rows > 0 ? { codeRange: [low, high] as const } : {}),
@@ -146,6 +165,12 @@ export class AdcSampler implements StepObserver {
         largestHeldError: this.largestHeldError,
       },
     };
+  }
+
+  /** The LSB of a fixed range; with a ratiometric one, the mean over the conversions (at the last solution seen when there were none). */
+  private reportedLsb(): number {
+    const samples = this.clipped.length;
+    return samples > 0 && (typeof this.spec.low === 'string' || typeof this.spec.high === 'string') ? this.sumLsb / samples : this.transfer.lsb(this.low, this.high);
   }
 
   private clippedRuns(side: -1 | 1): ClippedSamples {
