@@ -1,7 +1,7 @@
 import type { MapReader } from '../reading/reader.ts';
 import { quantities } from '../units/quantity.ts';
 import { across } from './solution.ts';
-import type { Binder, Device, Link, Mna, OpenPin, StepInfo } from './device.ts';
+import type { Binder, ComplexMna, Device, Link, Mna, OpenPin, StepInfo } from './device.ts';
 import type { PartKind, PartSpecBase } from './part-kind.ts';
 import { nodeOf, readNamedPins } from './pins.ts';
 import { readPresetOrMap } from './preset.ts';
@@ -103,21 +103,35 @@ class ComparatorDevice implements Device {
     } else {
       level = this.output.level(step.t);
     }
-    const g = 1 / this.spec.parameters.rout;
-    if (this.spec.parameters.output === 'push-pull') {
-      this.stampRail(m, this.spec.supply[0], this.low, g * (1 - level));
-      this.stampRail(m, this.spec.supply[1], this.high, g * level);
-    } else {
-      this.stampRail(m, this.spec.supply[0], this.low, g * (1 - level) + OFF_CONDUCTANCE);
-    }
+    this.stampOutput(m, level, true);
     return flipped;
   }
 
+  /**
+   * In the small-signal circuit the output holds its decided level: its conductances to the
+   * rails stay, the rails' fixed voltages do not (sources are zero there), and the inputs
+   * have no effect.
+   */
+  stampSmallSignal(m: ComplexMna): void {
+    this.stampOutput(m, this.decision, false);
+  }
+
+  /** The output at `level` (0 low, 1 high, between during an edge) through rout to the rails. */
+  private stampOutput(m: Mna, level: number, withSources: boolean): void {
+    const g = 1 / this.spec.parameters.rout;
+    if (this.spec.parameters.output === 'push-pull') {
+      this.stampRail(m, this.spec.supply[0], this.low, g * (1 - level), withSources);
+      this.stampRail(m, this.spec.supply[1], this.high, g * level, withSources);
+    } else {
+      this.stampRail(m, this.spec.supply[0], this.low, g * (1 - level) + OFF_CONDUCTANCE, withSources);
+    }
+  }
+
   /** A conductance g from the output to a rail, on the output's row only. */
-  private stampRail(m: Mna, rail: Supply, index: number, g: number): void {
+  private stampRail(m: Mna, rail: Supply, index: number, g: number, withSources: boolean): void {
     m.add(this.out, this.out, g);
-    if ('volts' in rail) m.rhs(this.out, g * rail.volts);
-    else m.add(this.out, index, -g);
+    if (!('volts' in rail)) m.add(this.out, index, -g);
+    else if (withSources) m.rhs(this.out, g * rail.volts);
   }
 
   /** The decision at solution x, from the accepted one (hysteresis: the band keeps it). */

@@ -1,8 +1,8 @@
 import type { MapReader, ValueReader } from '../reading/reader.ts';
 import { quantities } from '../units/quantity.ts';
-import { stampConductance, stampCurrent } from './stamps.ts';
+import { stampAdmittance, stampConductance, stampCurrent } from './stamps.ts';
 import { across } from './solution.ts';
-import type { Binder, Device, Link, Mna, StepInfo } from './device.ts';
+import type { Binder, ComplexMna, Device, Link, Mna, StepInfo } from './device.ts';
 import type { Conditions, PartKind, PartSpecBase } from './part-kind.ts';
 import { nodeOf, readBetween } from './pins.ts';
 import { readPresetOrMap } from './preset.ts';
@@ -105,6 +105,13 @@ class DiodeDevice implements Device {
     stampCurrent(m, this.inner, this.cathode, this.junction.current - g * u);
     this.charge?.stamp(m, this.inner, this.cathode, u, step);
     return u !== v;
+  }
+
+  /** Series resistance, the junction's slope at the operating point, and its capacitance there. */
+  stampSmallSignal(m: ComplexMna, x: Float64Array, omega: number): void {
+    this.stampStatic(m);
+    const v = across(x, this.inner, this.cathode);
+    stampAdmittance(m, this.inner, this.cathode, this.junction.slope(v), this.charge === null ? 0 : omega * this.charge.capacitance(v));
   }
 
   accept(x: Float64Array, step: StepInfo): void {

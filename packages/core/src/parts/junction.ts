@@ -66,6 +66,13 @@ export class Junction {
     this.conductance = g + GMIN;
     return u;
   }
+
+  /** dI/dV at junction voltage `v`, without limiting: the small-signal conductance at an operating point. */
+  slope(v: number): number {
+    let g = (this.is * exponentialSlope(v / this.nvt)) / this.nvt;
+    if (Number.isFinite(this.breakdown)) g += (BREAKDOWN_CURRENT * exponentialSlope(-(v + this.breakdown) / this.vt)) / this.vt;
+    return g + GMIN;
+  }
 }
 
 /** exp(x), continued along its tangent beyond MAX_EXPONENT. */
