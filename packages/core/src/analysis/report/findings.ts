@@ -3,11 +3,8 @@ import type { OpampSpec } from '../../parts/opamp.ts';
 import type { StepObserver } from '../../transient/observer.ts';
 import type { TransientResult } from '../../transient/result.ts';
 import type { AdcReport } from '../adc/adc-report.ts';
-import { stimulusCorners } from '../ringing/events.ts';
-import { findRinging } from '../ringing/find-ringing.ts';
-import { RowRecorder } from '../ringing/row-recorder.ts';
+import { RingingWatch } from '../ringing/ringing-watch.ts';
 import { TwoStepGuard } from '../ringing/two-step-guard.ts';
-import type { RingingEvent } from '../ringing/types.ts';
 import { SaturationTracker } from '../saturation/saturation-tracker.ts';
 import { ampDriving, ringingHint, saturationHint } from './hints.ts';
 import { stageShape } from './stage-shape.ts';
@@ -16,13 +13,14 @@ import { FINDINGS_SCHEMA, type Findings, type FindingsOptions } from './types.ts
 /**
  * The saturation and ringing analyses of one run. Hand `observers` to `simulate`; after the
  * run, `finish` turns what they saw into `Findings`. Nodes examined for ringing are the
- * recorded and every op-amp output, recorded at the output rows by an observer of their own,
- * so the analysis works when the run keeps no columns.
+ * recorded and every op-amp output, read at the output rows by an observer of their own, so
+ * the analysis works when the run keeps no columns; it holds only bounded windows of rows
+ * after events (stimulus corners, and rail exits as the saturation tracker finds them).
  */
 export class FindingsWatch {
   readonly observers: readonly StepObserver[];
   private readonly saturation: SaturationTracker;
-  private readonly recorder: RowRecorder;
+  private readonly ringing: RingingWatch;
   private readonly guard: TwoStepGuard;
   private readonly nodes: string[];
 
@@ -32,10 +30,11 @@ export class FindingsWatch {
   ) {
     const outputs = this.amps().map((a) => a.pins.find((p) => p.pin === 'out')!.node);
     this.nodes = [...new Set([...circuit.recorded, ...outputs])].filter((n) => n !== 'gnd');
-    this.saturation = new SaturationTracker(circuit, options);
-    this.recorder = new RowRecorder(circuit, this.nodes);
+    this.saturation = new SaturationTracker(circuit, options, (part, time) => this.ringing.event({ time, cause: `${part} left a rail` }));
+    // After the tracker, which tells a rail exit once a merge gap has passed.
+    this.ringing = new RingingWatch(circuit, this.nodes, options, this.saturation.exitDelay);
     this.guard = new TwoStepGuard(this.nodes);
-    this.observers = [this.saturation, this.recorder, this.guard];
+    this.observers = [this.saturation, this.ringing, this.guard];
   }
 
   finish(transient: TransientResult, adc: readonly AdcReport[] = []): Findings {
@@ -49,12 +48,7 @@ export class FindingsWatch {
       const hint = saturationHint(withOverdrive, stage);
       return hint ? { ...withOverdrive, hint } : withOverdrive;
     });
-    const events: RingingEvent[] = [
-      ...stimulusCorners(circuit.parts, circuit.simulate.duration),
-      ...found.railExits.map((e) => ({ time: e.time, cause: `${e.part} left a rail` })),
-    ];
-    const outputStep = circuit.simulate.outputStep;
-    const { ringing, warnings, events: clusters } = findRinging({ time: this.recorder.time, columns: this.recorder.columns, rows: this.recorder.rows }, events, outputStep, this.options);
+    const { ringing, warnings, events: clusters } = this.ringing.finish();
     const hinted = ringing.map((finding) => {
       const amp = ampDriving(circuit, finding.node);
       const hint = amp ? ringingHint(finding, amp, shapes.get(amp.name)!.shape) : undefined;
@@ -71,7 +65,7 @@ export class FindingsWatch {
       warnings: allWarnings,
       stats: {
         ...transient.stats,
-        rows: this.recorder.rows,
+        rows: this.ringing.rows,
         events: clusters,
         nodes: this.nodes,
       },

@@ -8,6 +8,11 @@ export interface RingingOptions {
   eventGap?: number;
   /** Relative disagreement allowed between the crossing and the spectral frequency. Default 0.15. */
   spectralTolerance?: number;
+  /**
+   * Output rows examined after each event, at most (fewer when the next event comes first).
+   * Bounds the memory and the time of the analysis whatever the run's length. Default 32,768.
+   */
+  windowRows?: number;
 }
 
 /** A damped (or sustained) oscillation seen on one node after one event. */

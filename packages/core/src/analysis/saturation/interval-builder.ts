@@ -19,6 +19,8 @@ export interface RawInterval {
 export class IntervalBuilder {
   private open: RawInterval | null = null;
   private readonly closed: RawInterval[] = [];
+  /** Closed intervals already handed out by `settle`: they merge with nothing any more. */
+  private settled = 0;
 
   constructor(private readonly mergeGap: number) {}
 
@@ -29,7 +31,7 @@ export class IntervalBuilder {
       return;
     }
     const last = this.closed[this.closed.length - 1];
-    if (last !== undefined && t - last.end <= this.mergeGap) {
+    if (last !== undefined && this.closed.length > this.settled && t - last.end <= this.mergeGap) {
       this.open = this.closed.pop()!;
       this.open.fragments++;
       if (measure > this.open.worst) this.open.worst = measure;
@@ -45,6 +47,14 @@ export class IntervalBuilder {
     this.open.endValue = value;
     this.closed.push(this.open);
     this.open = null;
+  }
+
+  /**
+   * Hand each closed interval that ended at or before `t` to `each`, once. Called with `t` a
+   * merge gap before the latest solution, these are final: no later fragment can join them.
+   */
+  settle(t: number, each: (interval: RawInterval) => void): void {
+    while (this.settled < this.closed.length && this.closed[this.settled].end <= t) each(this.closed[this.settled++]);
   }
 
   /** All intervals, an open one closed at `end`; those shorter than `minDuration` dropped. */

@@ -12,6 +12,8 @@ type Watched = {
   readonly rising: IntervalBuilder;
   readonly falling: IntervalBuilder;
   readonly current: IntervalBuilder;
+  /** Tells a settled rail interval's end as a rail exit. */
+  readonly exit: (interval: RawInterval) => void;
   lastOutput: number;
 };
 
@@ -20,25 +22,39 @@ export interface SaturationFindings {
   readonly saturation: SaturationInterval[];
   readonly slew: SlewInterval[];
   readonly currentLimit: CurrentLimitInterval[];
-  /** Rail exits (ends of saturation intervals before the run's end): events for the ringing search. */
-  readonly railExits: { part: string; time: number }[];
 }
+
+/** Told of each rail exit (the end of a saturation interval before the run's end), once it is final. */
+export type RailExitListener = (part: string, time: number) => void;
 
 /**
  * Watches every op-amp at every accepted step (a StepObserver) and builds intervals at each
  * rail, of slew-rate limiting and of output current limiting. Rail entries and exits are
  * region changes, which the stepper narrows down onto, so their times are exact to the
  * stepper's event resolution; slewing and current limiting are seen at accepted steps.
+ * Rail exits, the ringing search's events, are told as soon as they are final: a merge gap
+ * after they happen (`exitDelay`), when no return to the rail can merge them away.
  */
 export class SaturationTracker implements StepObserver {
   private watched: Watched[] = [];
   private lastT = 0;
   private readonly mergeGap: number;
   private readonly minDuration: number;
+  private readonly duration: number;
 
-  constructor(circuit: Circuit, options: SaturationOptions = {}) {
+  constructor(
+    circuit: Circuit,
+    options: SaturationOptions = {},
+    private readonly onRailExit: RailExitListener = () => {},
+  ) {
     this.mergeGap = options.mergeGap ?? 2 * circuit.simulate.outputStep;
     this.minDuration = options.minDuration ?? 0;
+    this.duration = circuit.simulate.duration;
+  }
+
+  /** How long after a rail exit it is told, seconds at most (beyond the step that sees it settle). */
+  get exitDelay(): number {
+    return this.mergeGap;
   }
 
   bind(context: ObserverContext): void {
@@ -50,6 +66,9 @@ export class SaturationTracker implements StepObserver {
       rising: new IntervalBuilder(this.mergeGap),
       falling: new IntervalBuilder(this.mergeGap),
       current: new IntervalBuilder(this.mergeGap),
+      exit: (i: RawInterval) => {
+        if (i.end - i.start >= this.minDuration && i.end < this.duration) this.onRailExit(d.name, i.end);
+      },
       lastOutput: 0,
     }));
   }
@@ -74,22 +93,24 @@ export class SaturationTracker implements StepObserver {
       if (s.currentLimited) w.current.on(t, Math.abs(out), out);
       else w.current.off(t, out);
       w.lastOutput = out;
+      w.high.settle(t - this.mergeGap, w.exit);
+      w.low.settle(t - this.mergeGap, w.exit);
     }
   }
 
-  /** The intervals, sorted by start time. */
+  /** The intervals, sorted by start time; the rail exits not yet told are told first. */
   results(): SaturationFindings {
     const saturation: SaturationInterval[] = [];
     const slew: SlewInterval[] = [];
     const currentLimit: CurrentLimitInterval[] = [];
-    const railExits: { part: string; time: number }[] = [];
     const end = this.lastT;
     for (const w of this.watched) {
+      // No step follows: every exit is final.
+      for (const builder of [w.high, w.low]) builder.settle(end, w.exit);
       const base = (i: RawInterval): Interval => ({ part: w.name, start: i.start, end: i.end, duration: i.end - i.start, fragments: i.fragments });
       for (const [rail, builder] of [['high', w.high], ['low', w.low]] as const) {
         for (const i of builder.finish(end, w.lastOutput, this.minDuration)) {
           saturation.push({ ...base(i), rail, limit: i.startValue, worstInputError: i.worst });
-          if (i.end < end) railExits.push({ part: w.name, time: i.end });
         }
       }
       for (const [direction, builder] of [['rising', w.rising], ['falling', w.falling]] as const) {
@@ -101,6 +122,6 @@ export class SaturationTracker implements StepObserver {
       for (const i of w.current.finish(end, w.lastOutput, this.minDuration)) currentLimit.push({ ...base(i), worstOutput: i.worst });
     }
     const byStart = (a: Interval, b: Interval): number => a.start - b.start || a.part.localeCompare(b.part);
-    return { saturation: saturation.sort(byStart), slew: slew.sort(byStart), currentLimit: currentLimit.sort(byStart), railExits: railExits.sort((a, b) => a.time - b.time) };
+    return { saturation: saturation.sort(byStart), slew: slew.sort(byStart), currentLimit: currentLimit.sort(byStart) };
   }
 }
