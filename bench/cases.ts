@@ -52,3 +52,21 @@ simulate: { duration: ${periods}m, output-step: 1u }
 record: [out]
 `;
 }
+
+/**
+ * The plain differentiator (10 kΩ, 100 nF, an amplifier of 100 dB and 1 MHz) driven by a
+ * 5 Hz triangle, one row per microsecond: after each corner (every 100 ms) it rings at about
+ * 12.6 kHz with a damping ratio near 0.007, for some 9 ms. `rows` sets the duration.
+ */
+export function differentiatorTriangle(rows: number): string {
+  return `
+circuit: bench-differentiator-triangle
+parts:
+  TRI: { voltage: { triangle: { low: 0, high: 1, frequency: 5 } }, between: [in, gnd] }
+  CIN: { capacitor: 100n, between: [in, sum] }
+  RF: { resistor: 10k, between: [sum, out] }
+  AMP: { opamp: { preset: general-purpose, gain: 100dB, gbw: 1MHz }, plus: gnd, minus: sum, out: out, supply: [-12, 12] }
+simulate: { duration: ${rows * 1e-6}, output-step: 1u }
+record: [in, out]
+`;
+}

@@ -2,6 +2,8 @@
 // (each target beside the ratio measured in this same run). Speed is shown here, never
 // asserted by a timed test. `pnpm bench WORD` runs only the sections whose title contains WORD.
 import { frequencyResponse, parseCircuit, simulate, type SimulateOptions } from '@voltcast/core';
+import { spawnSync } from 'node:child_process';
+import { fileURLToPath } from 'node:url';
 import { differentiatorIntoRails, linearNetwork, rcLadder } from './cases.ts';
 import { bareSolveLoop } from './bare-loop.ts';
 // An internal constant, printed beside the measurements that chose it.
@@ -30,6 +32,25 @@ function run(text: string, matrix: SimulateOptions['matrix'] = 'auto', repeats =
 
 function target(what: string, measured: string, goal: string, met: boolean): void {
   console.log(`  target: ${what}: ${measured} (target ${goal}) ${met ? 'met' : 'NOT MET'}`);
+}
+
+/** What `bench/streaming-run.ts` prints. */
+interface StreamedRun {
+  rows: number;
+  runSeconds: number;
+  bareSeconds?: number;
+  wallTime: { simulation: number; analyses: number };
+  maxRss: number;
+  ringing: number;
+  events: number;
+}
+
+/** One run of `bench/streaming-run.ts` in a child process (the same loader as this one). */
+function streamedRun(rows: number, bare: boolean): StreamedRun {
+  const script = fileURLToPath(new URL('./streaming-run.ts', import.meta.url));
+  const child = spawnSync(process.execPath, [...process.execArgv, script, String(rows), ...(bare ? ['--bare'] : [])], { encoding: 'utf8' });
+  if (child.status !== 0) throw new Error(`bench/streaming-run.ts ${rows} failed: ${child.stderr}`);
+  return JSON.parse(child.stdout.trim().split('\n').pop()!) as StreamedRun;
 }
 
 const perStep = (t: Timed) => (t.seconds / t.steps) * 1e3;
@@ -147,6 +168,26 @@ const sections: { title: string; run(): void }[] = [
           String(response.stats.factorizations).padStart(7),
         );
       }
+    },
+  },
+  {
+    title: 'streaming: memory and analysis time against rows (no kept columns, as voltcast run)',
+    run() {
+      console.log('  the plain differentiator, 5 Hz triangle, 1 µs rows: rings at 12.6 kHz after every corner; each size in a process of its own');
+      const small = streamedRun(200_000, true);
+      const large = streamedRun(2_000_000, false);
+      for (const r of [small, large]) {
+        console.log(`  ${r.rows.toLocaleString('en-US').padStart(9)} rows: ${r.runSeconds.toFixed(2)} s (simulation ${r.wallTime.simulation.toFixed(2)} s, analyses ${r.wallTime.analyses.toFixed(3)} s), peak memory ${mb(r.maxRss)}, ${r.events} events, ${r.ringing} ringing finding(s)`);
+      }
+      const ratio = large.maxRss / small.maxRss;
+      console.log(`  growth: ${((large.maxRss - small.maxRss) / (large.rows - small.rows)).toFixed(1)} bytes per row`);
+      target('peak memory (maxRSS), 2,000,000 / 200,000 rows', `${ratio.toFixed(2)}×`, '≤ 1.2×, flat', ratio <= 1.2);
+      // Against the simulation without any analysis (the best of two each, alternated).
+      const share = (small.runSeconds - small.bareSeconds!) / small.runSeconds;
+      console.log(`  200,000 rows: ${small.bareSeconds!.toFixed(2)} s without analyses, ${small.runSeconds.toFixed(2)} s with`);
+      target('analyses\' share of the run time, 200,000 rows', `${(100 * share).toFixed(1)}%`, '≤ 10%', share <= 0.1);
+      const examined = large.wallTime.analyses / large.runSeconds;
+      target('windows examined and work after the run, 2,000,000 rows (report.json wallTime)', `${(100 * examined).toFixed(1)}%`, '≤ 10%', examined <= 0.1);
     },
   },
   {

@@ -1,6 +1,6 @@
 import { writeFileSync } from 'node:fs';
 import { join } from 'node:path';
-import { formatSI, type Circuit, type Findings, type TransientResult } from '@voltcast/core';
+import { formatSI, type Circuit, type CircuitRun, type Findings } from '@voltcast/core';
 import { findingsText } from './findings-text.ts';
 import { adcText } from './adc-text.ts';
 import type { NodeExtremes } from './node-extremes.ts';
@@ -19,26 +19,24 @@ export interface RunReport extends Findings {
   /** Voltage of every named node at t = 0. */
   readonly operatingPoint: Record<string, number>;
   readonly recorded: Record<string, { min: number; max: number; final: number }>;
+  /** Seconds of wall-clock time the simulation and the analyses took. */
+  readonly wallTime: CircuitRun['wallTime'];
 }
 
 /**
- * Wall time is left out on purpose: the same circuit gives the same report, so reports can be
- * compared between runs and kept as expected data.
+ * `wallTime` is the one field that differs between runs of the same circuit (it is not in
+ * report.txt): leave it out when comparing reports or keeping them as expected data.
  */
-export function buildReport(
-  circuit: Circuit,
-  file: string,
-  result: TransientResult,
-  extremes: readonly NodeExtremes[],
-  findings: Findings,
-): RunReport {
+export function buildReport(file: string, run: CircuitRun, extremes: readonly NodeExtremes[]): RunReport {
+  const { circuit, transient, findings } = run;
   return {
     circuit: circuit.name,
     file,
     settings: circuit.simulate,
-    operatingPoint: Object.fromEntries(result.operatingPoint),
+    operatingPoint: Object.fromEntries(transient.operatingPoint),
     recorded: Object.fromEntries(extremes.map(({ node, min, max, final }) => [node, { min, max, final }])),
     ...findings,
+    wallTime: run.wallTime,
   };
 }
 

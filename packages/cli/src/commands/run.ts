@@ -51,7 +51,7 @@ export async function runCommand(file: string, options: RunOptions): Promise<voi
       progress.stop();
       csv.close();
     }
-    const report = buildReport(circuit, fileName, run.transient, extremes.results(), run.findings);
+    const report = buildReport(fileName, run, extremes.results());
     const adcFiles = writeAdcFiles(staging, circuit.name, run.adcs, codeFormats);
     const names = ['waveforms.csv', ...adcFiles, ...writeReport(staging, report).map((path) => basename(path))];
     if (options.plot) {

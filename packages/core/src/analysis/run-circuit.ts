@@ -18,6 +18,12 @@ export interface CircuitRun {
   readonly adcs: readonly AdcReadout[];
   /** Saturation, slew, current-limit and ringing findings with the ADC reports (docs/report-schema.md). */
   readonly findings: Findings;
+  /**
+   * Wall-clock seconds of the simulation and of the analyses. The analyses are the windows
+   * examined for ringing during the run and all the work after it; what the watchers do at
+   * each step (saturation states, ADC samples, copying rows) counts as simulation.
+   */
+  readonly wallTime: { readonly simulation: number; readonly analyses: number };
 }
 
 /** Options for `runCircuit`: those of `simulate`, plus each analysis's own. */
@@ -34,7 +40,13 @@ export interface RunOptions extends SimulateOptions {
 export function runCircuit(circuit: Circuit, options: RunOptions = {}): CircuitRun {
   const adcs = circuit.adcs.map((spec) => new AdcSampler(spec, circuit.simulate.duration));
   const watch = new FindingsWatch(circuit, options.findings);
+  // Date.now: the core has no finer timer in every host it runs in; milliseconds suffice here.
+  const started = Date.now();
   const transient = simulate(circuit, { ...options, observers: [...(options.observers ?? []), ...adcs, ...watch.observers] });
+  const simulated = Date.now();
   const run = { circuit, transient, adcs: adcs.map((adc) => adc.readout()) };
-  return { ...run, findings: watch.finish(transient, run.adcs.map((adc) => adc.report)) };
+  const findings = watch.finish(transient, run.adcs.map((adc) => adc.report));
+  const during = watch.examineSeconds;
+  const wallTime = { simulation: (simulated - started) / 1000 - during, analyses: (Date.now() - simulated) / 1000 + during };
+  return { ...run, findings, wallTime };
 }

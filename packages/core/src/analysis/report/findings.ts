@@ -72,6 +72,11 @@ export class FindingsWatch {
     };
   }
 
+  /** Wall time spent examining ringing windows during the run so far, seconds. */
+  get examineSeconds(): number {
+    return this.ringing.examineSeconds;
+  }
+
   private amps(): OpampSpec[] {
     return this.circuit.parts.filter((p): p is OpampSpec => p.kind === 'opamp');
   }

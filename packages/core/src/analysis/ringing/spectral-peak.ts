@@ -1,7 +1,10 @@
 import FFT from 'fft.js';
 
-/** Most samples transformed: the FFT (8 times this, zero-padded) stays a few milliseconds. */
-const MAX_SAMPLES = 8192;
+/**
+ * Most samples transformed: the FFT (8 times this, zero-padded) stays a few milliseconds, and
+ * a cold process pays little to build and compile it.
+ */
+const MAX_SAMPLES = 4096;
 /** Fewest samples per period kept when a long stretch is thinned. */
 const SAMPLES_PER_PERIOD = 16;
 
@@ -24,7 +27,7 @@ export class SpectralPeak {
 
   /**
    * The peak of `values[from..to)` sampled every `dt`, about `center`. A stretch longer than
-   * 8,192 rows is thinned to every k-th row, keeping at least 16 per period of the expected
+   * 4,096 rows is thinned to every k-th row, keeping at least 16 per period of the expected
    * oscillation (`rowsPerPeriod`), and what is still longer is cut: thousands of samples over
    * hundreds of cycles confirm a frequency as well as millions do.
    */
