@@ -38,7 +38,8 @@ function target(what: string, measured: string, goal: string, met: boolean): voi
 interface StreamedRun {
   rows: number;
   runSeconds: number;
-  bareSeconds?: number;
+  runCpuSeconds: number;
+  bareCpuSeconds?: number;
   wallTime: { simulation: number; analyses: number };
   maxRss: number;
   ringing: number;
@@ -46,9 +47,9 @@ interface StreamedRun {
 }
 
 /** One run of `bench/streaming-run.ts` in a child process (the same loader as this one). */
-function streamedRun(rows: number, bare: boolean): StreamedRun {
+function streamedRun(rows: number, share: boolean): StreamedRun {
   const script = fileURLToPath(new URL('./streaming-run.ts', import.meta.url));
-  const child = spawnSync(process.execPath, [...process.execArgv, script, String(rows), ...(bare ? ['--bare'] : [])], { encoding: 'utf8' });
+  const child = spawnSync(process.execPath, [...process.execArgv, script, String(rows), ...(share ? ['--share'] : [])], { encoding: 'utf8' });
   if (child.status !== 0) throw new Error(`bench/streaming-run.ts ${rows} failed: ${child.stderr}`);
   return JSON.parse(child.stdout.trim().split('\n').pop()!) as StreamedRun;
 }
@@ -173,8 +174,8 @@ const sections: { title: string; run(): void }[] = [
   {
     title: 'streaming: memory and analysis time against rows (no kept columns, as voltcast run)',
     run() {
-      console.log('  the plain differentiator, 5 Hz triangle, 1 µs rows: rings at 12.6 kHz after every corner; each size in a process of its own');
-      const small = streamedRun(200_000, true);
+      console.log('  the plain differentiator, 5 Hz triangle, 1 µs rows: rings at 12.6 kHz after every corner; each run in a process of its own');
+      const small = streamedRun(200_000, false);
       const large = streamedRun(2_000_000, false);
       for (const r of [small, large]) {
         console.log(`  ${r.rows.toLocaleString('en-US').padStart(9)} rows: ${r.runSeconds.toFixed(2)} s (simulation ${r.wallTime.simulation.toFixed(2)} s, analyses ${r.wallTime.analyses.toFixed(3)} s), peak memory ${mb(r.maxRss)}, ${r.events} events, ${r.ringing} ringing finding(s)`);
@@ -182,12 +183,14 @@ const sections: { title: string; run(): void }[] = [
       const ratio = large.maxRss / small.maxRss;
       console.log(`  growth: ${((large.maxRss - small.maxRss) / (large.rows - small.rows)).toFixed(1)} bytes per row`);
       target('peak memory (maxRSS), 2,000,000 / 200,000 rows', `${ratio.toFixed(2)}×`, '≤ 1.2×, flat', ratio <= 1.2);
-      // Against the simulation without any analysis (the best of two each, alternated).
-      const share = (small.runSeconds - small.bareSeconds!) / small.runSeconds;
-      console.log(`  200,000 rows: ${small.bareSeconds!.toFixed(2)} s without analyses, ${small.runSeconds.toFixed(2)} s with`);
-      target('analyses\' share of the run time, 200,000 rows', `${(100 * share).toFixed(1)}%`, '≤ 10%', share <= 0.1);
       const examined = large.wallTime.analyses / large.runSeconds;
-      target('windows examined and work after the run, 2,000,000 rows (report.json wallTime)', `${(100 * examined).toFixed(1)}%`, '≤ 10%', examined <= 0.1);
+      target('analyses of a cold run, 2,000,000 rows (windows and the work after the run: report.json wallTime)', `${(100 * examined).toFixed(1)}%`, '≤ 10%', examined <= 0.1);
+      // Everything the analyses cost, watching at every step included (the saturation states,
+      // the two-step guard, the rows for the ringing windows): against the bare simulation.
+      const warm = streamedRun(200_000, true);
+      const share = (warm.runCpuSeconds - warm.bareCpuSeconds!) / warm.runCpuSeconds;
+      console.log(`  200,000 rows, warm, processor time, best of 3: ${warm.bareCpuSeconds!.toFixed(2)} s simulating alone, ${warm.runCpuSeconds.toFixed(2)} s with every analysis`);
+      target('analyses\' share of the run time, watching at every step included', `${(100 * share).toFixed(1)}%`, '≤ 10%', share <= 0.1);
     },
   },
   {

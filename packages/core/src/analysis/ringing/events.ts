@@ -19,6 +19,8 @@ interface Cursor {
 export class StimulusCorners {
   private readonly cursors: Cursor[] = [];
   private readonly eps: number;
+  /** The earliest corner not yet handed out: `take` is called at every step and mostly has nothing to do. */
+  private next = Infinity;
 
   constructor(
     parts: readonly PartSpecBase[],
@@ -29,11 +31,14 @@ export class StimulusCorners {
       const wave = (part as PartSpecBase & { wave?: Wave }).wave;
       if (wave !== undefined) this.cursors.push({ wave, cause: `corner of ${part.name}`, previous: 0, at: wave.nextCorner(this.eps) });
     }
+    this.next = Math.min(...this.cursors.map((c) => c.at));
   }
 
   /** Hand each corner before `until` to `each`, once. */
   take(until: number, each: (event: RingingEvent) => void): void {
+    if (until <= this.next) return;
     const end = Math.min(until, this.duration - this.eps);
+    this.next = Infinity;
     for (const c of this.cursors) {
       while (c.at < end) {
         const t = c.at;
@@ -42,6 +47,7 @@ export class StimulusCorners {
         c.previous = t;
         c.at = next;
       }
+      this.next = Math.min(this.next, c.at);
     }
   }
 }

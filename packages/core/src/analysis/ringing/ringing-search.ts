@@ -21,6 +21,8 @@ interface OpenCluster {
   first: number;
   last: number;
   readonly causes: string[];
+  /** First row of the window (the row at or after `last`), once that row has come; else -1. */
+  from: number;
 }
 
 /**
@@ -46,6 +48,8 @@ export class RingingSearch {
   private readonly warnings: ReportWarning[] = [];
   private readonly spectrum = new SpectralPeak();
   private clusters = 0;
+  /** Every event before this time has been told. */
+  private frontier = -Infinity;
   private readonly gap: number;
   private readonly window: number;
   private readonly margin: number;
@@ -71,8 +75,9 @@ export class RingingSearch {
     this.latest = new Int32Array(nodes.length).fill(-1);
   }
 
-  /** An instant after which to look for ringing. */
+  /** An instant after which to look for ringing; told before the search's frontier passes it. */
   event(e: RingingEvent): void {
+    if (e.time < this.frontier) throw new Error(`RingingSearch: the event at ${e.time} s (${e.cause}) was told after the frontier passed it (${this.frontier} s)`);
     let at = this.pending.length;
     while (at > 0 && this.pending[at - 1].time > e.time) at--;
     this.pending.splice(at, 0, e);
@@ -80,12 +85,14 @@ export class RingingSearch {
 
   /** The next output row (values in `nodes` order); every event before `frontier` has been told. */
   row(time: number, values: ArrayLike<number>, frontier: number): void {
+    this.frontier = Math.max(this.frontier, frontier);
     if (this.rows.full) {
-      const open = this.open === null ? Infinity : this.rows.rowAtOrAfter(this.open.last, this.eps);
+      const open = this.open === null ? Infinity : this.windowStart(this.open);
       this.rows.dropBefore(Math.min(open, this.rows.end - this.margin));
     }
     this.rows.push(time, values);
-    this.advance(frontier, false);
+    // Most rows settle nothing: no window open, no event due.
+    if (this.open !== null || (this.pending.length > 0 && this.pending[0].time < frontier)) this.advance(this.frontier, false);
   }
 
   /** After the last row and the last event: examine what is still open. */
@@ -104,11 +111,12 @@ export class RingingSearch {
       if (open !== null) {
         if (next !== undefined && next.time - open.last < this.gap) {
           open.last = next.time;
+          open.from = -1;
           if (!open.causes.includes(next.cause)) open.causes.push(next.cause);
           this.pending.shift();
           continue;
         }
-        const from = rows.rowAtOrAfter(open.last, this.eps);
+        const from = this.windowStart(open);
         const full = from + this.window;
         // The window ends at the row of the next cluster's first event, or full; it is not
         // full before no event can join the cluster any more.
@@ -128,10 +136,18 @@ export class RingingSearch {
       const beforeRow = rows.time[i] > next.time + this.eps ? Math.max(0, at - 1) : at;
       const held = rows.at(beforeRow);
       for (let p = 0; p < this.nodes.length; p++) this.before[p] = rows.columns[p][held];
-      this.open = { first: next.time, last: next.time, causes: [next.cause] };
+      this.open = { first: next.time, last: next.time, causes: [next.cause], from: -1 };
       this.pending.shift();
       this.clusters++;
     }
+  }
+
+  /** The window's first row: the row at or after the cluster's last event (`end` until it comes). */
+  private windowStart(open: OpenCluster): number {
+    if (open.from >= 0) return open.from;
+    const from = this.rows.rowAtOrAfter(open.last, this.eps);
+    if (from < this.rows.end) open.from = from;
+    return from;
   }
 
   private examine(open: OpenCluster, from: number, to: number): void {

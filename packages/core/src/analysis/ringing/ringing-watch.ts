@@ -44,9 +44,9 @@ export class RingingWatch implements StepObserver {
   accepted(t: number, x: Float64Array): void {
     const frontier = t - this.lag;
     this.corners.take(frontier, this.tell);
-    while (this.row < this.grid.rows && this.grid.time(this.row) <= t + this.eps) {
+    for (let time = this.grid.time(this.row); this.row < this.grid.rows && time <= t + this.eps; time = this.grid.time(++this.row)) {
       for (let p = 0; p < this.indices.length; p++) this.values[p] = valueAt(x, this.indices[p]);
-      this.search.row(this.grid.time(this.row++), this.values, frontier);
+      this.search.row(time, this.values, frontier);
     }
   }
 
