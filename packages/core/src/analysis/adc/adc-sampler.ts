@@ -1,7 +1,8 @@
 import type { ObserverContext, StepObserver } from '../../transient/observer.ts';
 import type { AdcSpec } from '../../circuit/adc-spec.ts';
 import type { AdcReadout } from './adc-readout.ts';
-import type { ClippedSamples, CodeError, TimeInterval } from './adc-report.ts';
+import type { CodeError } from './adc-report.ts';
+import { ClippedRuns } from './clipped-runs.ts';
 import { SampleSchedule } from './sample-schedule.ts';
 import { Transfer } from './transfer.ts';
 import { SeededNoise } from './noise.ts';
@@ -11,8 +12,9 @@ import { across, valueAt } from '../../parts/solution.ts';
 /**
  * One converter watching the run. Its sample instants are landing points of the stepper, so
  * the value it converts is the solver's own solution at each instant, never an interpolation.
- * Every `average` consecutive samples make one reported code. All storage is sized before
- * the run: nothing is allocated per sample.
+ * Every `average` consecutive samples make one reported code. The codes are its output, sized
+ * before the run (nothing is allocated per sample); the report's figures (clipped runs, the
+ * largest code errors) are gathered as the codes come, keeping nothing else per sample.
  */
 export class AdcSampler implements StepObserver {
   private readonly schedule: SampleSchedule;
@@ -23,15 +25,17 @@ export class AdcSampler implements StepObserver {
   private readonly time: Float64Array;
   private readonly volts: Float64Array;
   private readonly code: Int32Array;
-  private readonly ideal: Int32Array;
-  /** With sampling: ideal code of the input as it was when the acquisition window opened. */
-  private readonly idealBefore: Int32Array;
+  /** Samples at or before the end of the run. */
+  private readonly samples: number;
   /** Acquisition window length; 0 without sampling. */
   private readonly acquisition: number;
   /** Input volts when the window of sample `next` opened (NaN until then). */
   private inputBefore = NaN;
-  /** Per sample: -1 input below the range, 1 above, 0 within. */
-  private readonly clipped: Int8Array;
+  private readonly clippedLow = new ClippedRuns();
+  private readonly clippedHigh = new ClippedRuns();
+  /** The code furthest from the ideal code of the input at its instant, and from the input before the window. */
+  private largestError: CodeError | undefined;
+  private largestErrorBeforeWindow: CodeError | undefined;
   private heldPlus = -1;
   private heldMinus = -1;
   private inputPlus = -1;
@@ -63,10 +67,8 @@ export class AdcSampler implements StepObserver {
     this.time = new Float64Array(this.rows);
     this.volts = new Float64Array(this.rows);
     this.code = new Int32Array(this.rows);
-    this.ideal = new Int32Array(this.rows);
-    this.idealBefore = new Int32Array(spec.sampling !== undefined ? this.rows : 0);
     this.acquisition = spec.sampling?.acquisition ?? 0;
-    this.clipped = new Int8Array(this.rows * spec.average);
+    this.samples = this.rows * spec.average;
   }
 
   bind(context: ObserverContext): void {
@@ -86,7 +88,7 @@ export class AdcSampler implements StepObserver {
 
   /** The next sample instant, or with sampling the opening of its window when still ahead. */
   nextInstant(t: number): number {
-    for (let k = this.next; k < this.clipped.length; k++) {
+    for (let k = this.next; k < this.samples; k++) {
       const instant = this.schedule.instant(k);
       const opens = instant - this.acquisition;
       if (k === this.next && this.acquisition > 0 && Number.isNaN(this.inputBefore) && opens > t) return opens;
@@ -96,7 +98,7 @@ export class AdcSampler implements StepObserver {
   }
 
   accepted(t: number, x: Float64Array): void {
-    const count = this.clipped.length;
+    const count = this.samples;
     if (this.acquisition > 0 && this.next < count && Number.isNaN(this.inputBefore) && t >= this.schedule.instant(this.next) - this.acquisition - this.tolerance) {
       this.inputBefore = this.input(x);
     }
@@ -114,7 +116,9 @@ export class AdcSampler implements StepObserver {
     const t = this.transfer;
     const { low, high } = this;
     const raw = t.unbounded(held, low, high, this.noise.next());
-    this.clipped[k] = raw < 0 ? -1 : raw > t.top ? 1 : 0;
+    const instant = this.schedule.instant(k);
+    this.clippedLow.add(instant, raw < 0);
+    this.clippedHigh.add(instant, raw > t.top);
     this.sumCode += t.clip(raw);
     this.sumIdeal += t.clip(t.ideal(input, low, high));
     this.sumLsb += t.lsb(low, high);
@@ -127,11 +131,12 @@ export class AdcSampler implements StepObserver {
     const average = this.spec.average;
     if ((k + 1) % average !== 0) return;
     const row = (k + 1) / average - 1;
-    this.time[row] = this.schedule.instant(k);
+    const code = encode(Math.round(this.sumCode / average), this.spec.bits, this.spec.coding);
+    this.time[row] = instant;
     this.volts[row] = this.sumVolts / average;
-    this.code[row] = encode(Math.round(this.sumCode / average), this.spec.bits, this.spec.coding);
-    this.ideal[row] = encode(Math.round(this.sumIdeal / average), this.spec.bits, this.spec.coding);
-    if (this.acquisition > 0) this.idealBefore[row] = encode(Math.round(this.sumIdealBefore / average), this.spec.bits, this.spec.coding);
+    this.code[row] = code;
+    this.largestError = furthest(this.largestError, row, instant, code, encode(Math.round(this.sumIdeal / average), this.spec.bits, this.spec.coding));
+    if (this.acquisition > 0) this.largestErrorBeforeWindow = furthest(this.largestErrorBeforeWindow, row, instant, code, encode(Math.round(this.sumIdealBefore / average), this.spec.bits, this.spec.coding));
     this.sumVolts = this.sumCode = this.sumIdeal = this.sumIdealBefore = 0;
   }
 
@@ -144,8 +149,7 @@ export class AdcSampler implements StepObserver {
       low = Math.min(low, code[r]);
       high = Math.max(high, code[r]);
     }
-    const largestError = largestDifference(code, this.ideal, time);
-    const largestErrorBeforeWindow = spec.sampling !== undefined ? largestDifference(code, this.idealBefore, time) : undefined;
+    const { largestError, largestErrorBeforeWindow } = this;
     return {
       spec,
       index: Int32Array.from({ length: rows }, (_, r) => r),
@@ -155,11 +159,11 @@ export class AdcSampler implements StepObserver {
       report: {
         name: spec.name,
         lsb: this.reportedLsb(),
-        samples: this.clipped.length,
+        samples: this.samples,
         codes: rows,
         ...(rows > 0 ? { codeRange: [low, high] as const } : {}),
-        clippedLow: this.clippedRuns(-1),
-        clippedHigh: this.clippedRuns(1),
+        clippedLow: this.clippedLow.result(),
+        clippedHigh: this.clippedHigh.result(),
         ...(largestError !== undefined ? { largestError } : {}),
         ...(largestErrorBeforeWindow !== undefined ? { largestErrorBeforeWindow } : {}),
         largestHeldError: this.largestHeldError,
@@ -169,31 +173,13 @@ export class AdcSampler implements StepObserver {
 
   /** The LSB of a fixed range; with a ratiometric one, the mean over the conversions (at the last solution seen when there were none). */
   private reportedLsb(): number {
-    const samples = this.clipped.length;
+    const samples = this.samples;
     return samples > 0 && (typeof this.spec.low === 'string' || typeof this.spec.high === 'string') ? this.sumLsb / samples : this.transfer.lsb(this.low, this.high);
-  }
-
-  private clippedRuns(side: -1 | 1): ClippedSamples {
-    const intervals: TimeInterval[] = [];
-    let count = 0;
-    let from = -1;
-    for (let k = 0; k <= this.clipped.length; k++) {
-      const inside = k < this.clipped.length && this.clipped[k] === side;
-      if (inside) count++;
-      if (inside && from < 0) from = k;
-      if (!inside && from >= 0) {
-        intervals.push({ from: this.schedule.instant(from), to: this.schedule.instant(k - 1) });
-        from = -1;
-      }
-    }
-    return { count, intervals };
   }
 }
 
-/** The row where `code` differs most from `ideal` (the first of equals). */
-function largestDifference(code: Int32Array, ideal: Int32Array, time: Float64Array): CodeError | undefined {
-  let worst = -1;
-  for (let r = 0; r < code.length; r++) if (worst < 0 || Math.abs(code[r] - ideal[r]) > Math.abs(code[worst] - ideal[worst])) worst = r;
-  if (worst < 0) return undefined;
-  return { codes: code[worst] - ideal[worst], index: worst, time: time[worst], read: code[worst], ideal: ideal[worst] };
+/** `worst`, or reported code `code` at `row` if it is further from `ideal` (the first of equals stays). */
+function furthest(worst: CodeError | undefined, row: number, time: number, code: number, ideal: number): CodeError | undefined {
+  if (worst !== undefined && Math.abs(code - ideal) <= Math.abs(worst.codes)) return worst;
+  return { codes: code - ideal, index: row, time, read: code, ideal };
 }
