@@ -1,11 +1,13 @@
 // `pnpm bench`: how fast the engine runs, printed with the targets of the work that set them
 // (each target beside the ratio measured in this same run). Speed is shown here, never
-// asserted by a timed test. `pnpm bench WORD` runs only the sections whose title contains WORD.
+// asserted by a timed test. `pnpm bench WORD` runs only the sections whose title contains WORD;
+// `pnpm bench accuracy` prints error against references with the time (bench/accuracy.ts).
 import { frequencyResponse, parseCircuit, simulate, type SimulateOptions } from '@voltcast/core';
 import { spawnSync } from 'node:child_process';
 import { fileURLToPath } from 'node:url';
 import { differentiatorIntoRails, linearNetwork, rcLadder } from './cases.ts';
 import { bareSolveLoop } from './bare-loop.ts';
+import { accuracyBench } from './accuracy.ts';
 // An internal constant, printed beside the measurements that chose it.
 import { SPARSE_FROM } from '../packages/core/src/transient/equations.ts';
 
@@ -192,6 +194,10 @@ const sections: { title: string; run(): void }[] = [
       console.log(`  200,000 rows, warm, processor time, best of 3: ${warm.bareCpuSeconds!.toFixed(2)} s simulating alone, ${warm.runCpuSeconds.toFixed(2)} s with every analysis`);
       target('analyses\' share of the run time, watching at every step included', `${(100 * share).toFixed(1)}%`, '≤ 10%', share <= 0.1);
     },
+  },
+  {
+    title: 'accuracy: error against references and CPU time, with odex as the peer',
+    run: accuracyBench,
   },
   {
     title: 'parse: 10,001 parts (best of 5)',

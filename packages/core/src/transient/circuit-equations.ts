@@ -25,6 +25,8 @@ export function newRunStats(): RunStats {
     newtonIterations: 0,
     newtonFailures: 0,
     dampingSteps: 0,
+    exactSteps: 0,
+    propagators: 0,
     minStep: Infinity,
     maxStep: 0,
   };

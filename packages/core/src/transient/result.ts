@@ -14,6 +14,10 @@ export interface RunStats {
   newtonFailures: number;
   /** Backward-Euler steps taken to damp after corners. */
   dampingSteps: number;
+  /** Accepted steps that were exact (matrix exponential over a linear stretch). */
+  exactSteps: number;
+  /** Exact-step maps built (one per step size and linearization). */
+  propagators: number;
   /** Smallest and largest accepted step, seconds. */
   minStep: number;
   maxStep: number;
@@ -48,4 +52,9 @@ export interface SimulateOptions {
    * small circuits, sparse from a few dozen unknowns on). The waveforms agree to rounding.
    */
   matrix?: 'dense' | 'sparse' | 'auto';
+  /**
+   * When false, linear stretches are stepped like the rest (trapezoidal, with error control)
+   * instead of exactly: for comparing the two. Default true.
+   */
+  exactSteps?: boolean;
 }

@@ -1,13 +1,16 @@
 import type { Circuit } from '../circuit/circuit.ts';
 import type { StepInfo } from '../parts/device.ts';
 import { circuitEquations, newRunStats } from './circuit-equations.ts';
+import { SPARSE_FROM } from './equations.ts';
 import { solveOperatingPoint } from './operating-point.ts';
 import { OutputGrid } from './output-grid.ts';
 import { OutputRecorder } from './output-recorder.ts';
 import { ObserverHub } from './observer-hub.ts';
+import { Landings } from './landings.ts';
 import type { SimulateOptions, TransientResult } from './result.ts';
 import { SimulationError } from './simulation-error.ts';
 import { TruncationError } from './truncation-error.ts';
+import { LinearStretch } from './linear-stretch.ts';
 import { formatSI } from '../units/format.ts';
 
 /** Fraction of the step before a corner used for the first (backward-Euler) step after it. */
@@ -18,12 +21,27 @@ const MAX_GROWTH = 2;
 const GROW_ABOVE = 1.5;
 /** Safety factor on the step the error estimate proposes. */
 const SAFETY = 0.9;
+/** The truncation-error floors never exceed `relative` times these (volts, amperes). */
+const FLOOR_VOLTS_PER_RELATIVE = 1e-2;
+const FLOOR_AMPS_PER_RELATIVE = 1e-5;
+/**
+ * A circuit with nonlinear parts is offered exact steps only after this many trapezoidal
+ * steps without a new factorization: its linearization has stopped moving.
+ */
+const QUIET_STEPS = 4;
+/** Trapezoidal steps before exact steps are tried again after a stretch broke off early; doubles each time it breaks off again. */
+const EXACT_RETRY_FIRST = 8;
+const EXACT_RETRY_MOST = 4096;
 
 /**
- * Transient analysis: operating point at t = 0, then trapezoidal steps with error control.
- * Every stimulus corner and output row is a landing point that a step ends on exactly;
- * after each corner (and at t = 0) two backward-Euler steps damp the trapezoidal rule's
- * own two-step oscillation before trapezoidal steps resume.
+ * Transient analysis: operating point at t = 0, then steps of two kinds. Where the circuit is
+ * linear between two corners of its drive (linear parts, amplifiers inside their linear
+ * range, piecewise-linear stimuli), exact steps (the matrix exponential, LinearStretch)
+ * carry it from landing point to landing point without truncation error. Elsewhere,
+ * trapezoidal steps with error control; after each corner (and at t = 0, and when exact
+ * steps hand over) two backward-Euler steps damp the trapezoidal rule's own two-step
+ * oscillation before trapezoidal steps resume. Every stimulus corner, output row and
+ * observer instant is a landing point that a step ends on exactly.
  */
 export function simulate(circuit: Circuit, options: SimulateOptions = {}): TransientResult {
   const settings = circuit.simulate;
@@ -44,8 +62,13 @@ export function simulate(circuit: Circuit, options: SimulateOptions = {}): Trans
   equations.accept(x, step);
   const operatingPoint = new Map(topology.labels.slice(0, topology.nodeCount).map((name, i) => [name, x[i]] as const));
 
-  const absolute = Float64Array.from(topology.isCurrent, (c) => (c ? settings.accuracy.amps : settings.accuracy.volts));
-  const error = new TruncationError(n, equations.watchedUnknowns(), settings.accuracy.relative, absolute);
+  const { relative } = settings.accuracy;
+  // The floors follow the knob: never above relative × 10 mV (or 10 µA), so that tightening
+  // `relative` keeps paying where the default floors (1 µV, 1 nA at 1e-4) would stop it.
+  const volts = Math.min(settings.accuracy.volts, relative * FLOOR_VOLTS_PER_RELATIVE);
+  const amps = Math.min(settings.accuracy.amps, relative * FLOOR_AMPS_PER_RELATIVE);
+  const absolute = Float64Array.from(topology.isCurrent, (c) => (c ? amps : volts));
+  const error = new TruncationError(n, equations.watchedUnknowns(), relative, absolute);
   error.restart(0, x);
 
   const observers = new ObserverHub(options.observers ?? [], topology, devices);
@@ -53,23 +76,67 @@ export function simulate(circuit: Circuit, options: SimulateOptions = {}): Trans
   const grid = new OutputGrid(settings.outputStep, duration);
   const output = new OutputRecorder(grid, Int32Array.from(circuit.recorded, (p) => topology.node(p)), options.keepColumns !== false, options.onRow);
   output.record(0, x);
+  const landings = new Landings(grid, output, observers, eps, duration, options.onProgress);
 
   let t = 0;
-  let row = 1;
   let corner = equations.nextCorner(eps);
-  let instant = observers.nextInstant(eps);
   let sinceCorner = 0;
   let natural = fixed ?? Math.min(maxStep, settings.outputStep);
   let lastH = NaN;
-  let nextProgress = 0.01;
   const worst = { index: 0 };
   /** Step imposed while narrowing onto an event; Infinity when none. */
   let cut = Infinity;
   /** Events are located to within this time. */
   const eventResolution = Math.max(Math.min(settings.outputStep, maxStep) * 1e-3, floor);
 
+  // Exact steps are dense products (n² per step, n³ per new step size): for circuits small
+  // enough that their equations are dense too.
+  const stretch = fixed === undefined && n < SPARSE_FROM && options.exactSteps !== false ? new LinearStretch(devices, n) : null;
+  /** True while exact steps carry a linear stretch. */
+  let exact = stretch !== null && stretch.begin(0, x, Math.min(corner, duration), step);
+  /** Exact steps since the stretch began; trapezoidal steps before the next try, and the wait after a failed one. */
+  let exactRun = 0;
+  let retryIn = 0;
+  let retryWait = EXACT_RETRY_FIRST;
+  /** Accepted trapezoidal steps in a row that needed no new factorization. */
+  let quiet = 0;
+
   while (t < duration - eps) {
-    const target = Math.min(corner, instant, grid.time(row), duration);
+    const target = Math.min(corner, landings.next(), duration);
+    if (exact) {
+      // No error control: as long as the landing points and max-step allow, in equal steps.
+      const h = (target - t) / Math.ceil((target - t) / Math.min(maxStep, target - t) - 1e-9);
+      if (stretch!.step(t, h, x, trial) && !equations.regionChanged(x, trial) && stretch!.holds(trial)) {
+        t = t + h >= target - eps ? target : t + h;
+        x.set(trial);
+        equations.accept(x, step);
+        stats.acceptedSteps++;
+        stats.exactSteps++;
+        exactRun++;
+        if (h < stats.minStep) stats.minStep = h;
+        if (h > stats.maxStep) stats.maxStep = h;
+        if (t >= corner - eps) {
+          corner = equations.nextCorner(t + eps);
+          equations.cornerPassed();
+          exactRun = 0;
+          exact = stretch!.begin(t, x, Math.min(corner, duration), step);
+        }
+        landings.passed(t, x);
+      } else {
+        exact = false;
+      }
+      if (!exact) {
+        // Hand over to trapezoidal steps, damping first as after a corner; a stretch that broke
+        // off early waits longer before the next try.
+        sinceCorner = 0;
+        natural = Math.min(maxStep, settings.outputStep);
+        error.restart(t, x);
+        retryWait = exactRun < EXACT_RETRY_FIRST ? Math.min(retryWait * 2, EXACT_RETRY_MOST) : EXACT_RETRY_FIRST;
+        retryIn = retryWait;
+      }
+      continue;
+    }
+
     let h = cut < Infinity ? cut : fixed !== undefined ? Math.min(natural, fixed) : sinceCorner === 0 ? Math.min(natural, corner - t) * FIRST_STEP_FRACTION : natural;
     h = Math.min(h, maxStep);
     let landing = false;
@@ -83,11 +150,13 @@ export function simulate(circuit: Circuit, options: SimulateOptions = {}): Trans
       landing = h === target - t;
     }
     // Keep the previous step exactly when this one differs only by rounding: same matrix.
-    if (Math.abs(h - lastH) <= eps) h = lastH;
+    // (Relative to the step too: a step near eps must still be able to grow.)
+    if (Math.abs(h - lastH) <= Math.min(eps, h * 1e-6)) h = lastH;
     step.t = landing ? target : t + h;
     step.h = h;
     step.method = sinceCorner < 2 ? 'be' : 'trap';
     trial.set(x);
+    const factorizations = stats.factorizations;
 
     if (!equations.solve(step, trial)) {
       stats.newtonFailures++;
@@ -133,23 +202,31 @@ export function simulate(circuit: Circuit, options: SimulateOptions = {}): Trans
     sinceCorner++;
     // While narrowing, the event lies in the rest of the bisected interval: halve again.
     cut = cut < Infinity && !event && h / 2 > eventResolution ? h / 2 : Infinity;
-    if (event || t >= corner - eps) {
+    const atCorner = t >= corner - eps;
+    if (event || atCorner) {
       error.restart(t, x);
       sinceCorner = 0;
-      if (t >= corner - eps) equations.cornerPassed();
+      if (atCorner) equations.cornerPassed();
       // An event may schedule corners of its own (a comparator's delayed edge).
       corner = equations.nextCorner(t + eps);
     } else {
       error.push(t, x);
     }
-    observers.accepted(t, x);
-    if (t >= instant - eps) instant = observers.nextInstant(t + eps);
-    while (row < grid.rows && grid.time(row) <= t + eps) output.record(row++, x);
-    if (options.onProgress && t >= nextProgress * duration) {
-      options.onProgress(t / duration);
-      nextProgress = Math.floor((t / duration) * 100 + 1) / 100;
+    // Exact steps take over at a corner (they need no damping) or after a quiet spell.
+    retryIn--;
+    quiet = stats.factorizations === factorizations ? quiet + 1 : 0;
+    const settled = stretch !== null && cut === Infinity && (stretch.linear || quiet >= QUIET_STEPS);
+    if (settled && ((atCorner && retryWait === EXACT_RETRY_FIRST) || (retryIn <= 0 && sinceCorner > 2))) {
+      exactRun = 0;
+      exact = stretch!.begin(t, x, Math.min(corner, duration), step);
+      if (!exact) {
+        retryWait = Math.min(retryWait * 2, EXACT_RETRY_MOST);
+        retryIn = retryWait;
+      }
     }
+    landings.passed(t, x);
   }
+  stats.propagators = stretch?.builds ?? 0;
 
   const columns = new Map(circuit.recorded.map((p, i) => [p, output.columns[i]] as const));
   return { time: output.time, columns, recorded: circuit.recorded, stats, operatingPoint };
