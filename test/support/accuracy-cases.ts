@@ -27,7 +27,7 @@ export interface AccuracyCase {
 export function plainDifferentiator(corners = 20): AccuracyCase {
   const r = 10e3;
   const c = 100e-9;
-  // The op-amp macro-model (DESIGN.md): gm into an internal node with R1 ∥ C1; out = that node.
+  // The op-amp macro-model (parts/opamp.ts): gm into an internal node with R1 ∥ C1; out = that node.
   const c1 = 1e-9;
   const gm = 2 * Math.PI * 1e6 * c1;
   const r1 = 1e5 / gm;

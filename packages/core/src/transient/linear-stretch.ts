@@ -151,9 +151,15 @@ export class LinearStretch {
     return true;
   }
 
-  /** True when every nonlinear device keeps, at `x`, the linearization the stretch began with. */
-  holds(x: Float64Array): boolean {
+  /**
+   * True when every nonlinear device keeps, at solution `x` at time `t`, the linearization the
+   * stretch began with (a device whose stamps move with time, as a comparator's output edge,
+   * does not).
+   */
+  holds(x: Float64Array, t: number): boolean {
     if (this.nonlinear.length === 0) return true;
+    this.info.t = t;
+    this.info.method = 'be';
     this.stampNewton(this.scratch, x);
     return sameEntries(this.scratch.values, this.frozen.values) && sameEntries(this.scratch.b, this.frozen.b);
   }

@@ -91,6 +91,7 @@ export function simulate(circuit: Circuit, options: SimulateOptions = {}): Trans
 
   // Exact steps are dense products (n² per step, n³ per new step size): for circuits small
   // enough that their equations are dense too.
+  const exactStep: StepInfo = { t: 0, h: 0, method: 'be', sourceScale: 1 };
   const stretch = fixed === undefined && n < SPARSE_FROM && options.exactSteps !== false ? new LinearStretch(devices, n) : null;
   /** True while exact steps carry a linear stretch. */
   let exact = stretch !== null && stretch.begin(0, x, Math.min(corner, duration), step);
@@ -106,10 +107,14 @@ export function simulate(circuit: Circuit, options: SimulateOptions = {}): Trans
     if (exact) {
       // No error control: as long as the landing points and max-step allow, in equal steps.
       const h = (target - t) / Math.ceil((target - t) / Math.min(maxStep, target - t) - 1e-9);
-      if (stretch!.step(t, h, x, trial) && !equations.regionChanged(x, trial) && stretch!.holds(trial)) {
-        t = t + h >= target - eps ? target : t + h;
+      const end = t + h >= target - eps ? target : t + h;
+      if (stretch!.step(t, h, x, trial) && !equations.regionChanged(x, trial) && stretch!.holds(trial, end)) {
+        t = end;
         x.set(trial);
-        equations.accept(x, step);
+        // The devices' history sees the step's end and length (a comparator times its flips by them).
+        exactStep.t = t;
+        exactStep.h = h;
+        equations.accept(x, exactStep);
         stats.acceptedSteps++;
         stats.exactSteps++;
         exactRun++;
