@@ -6,7 +6,8 @@ function stepOf(g: number[], c: number[], h: number, x: number[], p: number[], q
   const propagator = new Propagator(x.length);
   expect(propagator.build(Float64Array.from(g), Float64Array.from(c), h)).toBe(true);
   const out = new Float64Array(x.length);
-  propagator.apply(Float64Array.from(x), Float64Array.from(p), Float64Array.from(q), out);
+  propagator.prepare(0, Float64Array.from(p), Float64Array.from(q));
+  propagator.apply(Float64Array.from(x), 0, out);
   return out;
 }
 
@@ -32,9 +33,10 @@ describe('exact step over a linear stretch (Propagator)', () => {
     let x = Float64Array.of(1, 0);
     let next = new Float64Array(2);
     const none = new Float64Array(2);
+    propagator.prepare(0, none, none);
     const steps = 10_000;
     for (let k = 0; k < steps; k++) {
-      propagator.apply(x, none, none, next);
+      propagator.apply(x, 0, next);
       [x, next] = [next, x];
     }
     const t = steps * h;
@@ -53,6 +55,10 @@ describe('exact step over a linear stretch (Propagator)', () => {
     expect(out[0]).toBeCloseTo(1 - Math.exp(-1), 13);
     expect(out[1]).toBeCloseTo(1, 13);
     expect(out[2]).toBeCloseTo(out[0] - 1, 13);
+    // A ramp p = τ from rest: v(1) = 1 - (1 - e^{-1}) = e^{-1}, u follows the ramp to 1.
+    const ramp = stepOf(g, c, 1, [0, 0, 0], [0, 0, 0], [0, 0, 1]);
+    expect(ramp[0]).toBeCloseTo(Math.exp(-1), 13);
+    expect(ramp[1]).toBeCloseTo(1, 13);
   });
 
   it('a stiff mode (time constant 1e-9 of a 1e-3 step) decays to nothing instead of ringing', () => {

@@ -7,11 +7,11 @@ const KEPT = 12;
 /** Systems (C, G) kept: a switch that opens and closes alternates between two. */
 const SYSTEMS = 4;
 /**
- * A propagator costs about as much as a few dozen steps: builds beyond the first few are
- * allowed only as exact steps pay for them, one per this many.
+ * A propagator costs about 250·n³ operations, an exact step about 3·n²: beyond the first few,
+ * builds are allowed only as exact steps pay for them, one per STEPS_PER_BUILD_PER_UNKNOWN·n.
  */
-const FREE_BUILDS = 4;
-const STEPS_PER_BUILD = 64;
+const FREE_BUILDS = 2;
+const STEPS_PER_BUILD_PER_UNKNOWN = 8;
 /** Fractions of a stretch where the drive must lie on the line through its ends. */
 const SAMPLES = [0.1234, 0.5, 0.8765];
 /** Relative departure from that line still counted as linear (rounding of the wave's own arithmetic). */
@@ -57,6 +57,10 @@ export class LinearStretch {
   private readonly kept: { h: number; system: number; propagator: Propagator; used: number }[] = [];
   private readonly info: StepInfo = { t: 0, h: 0, method: 'be', sourceScale: 1 };
   private t0 = 0;
+  /** Stretches begun: names the drive a propagator was prepared for. */
+  private stretches = 0;
+  /** End of the current stretch. */
+  private end = 0;
   private clock = 0;
   /** True when no device is nonlinear: every stretch with a straight drive is linear. */
   readonly linear: boolean;
@@ -136,18 +140,19 @@ export class LinearStretch {
       }
     }
     this.t0 = t;
+    this.end = end;
+    this.stretches++;
     for (const d of this.withStep) d.stampStep!(this.scratch, restore);
     return linear;
   }
 
   /** The exact solution at `t + h` from `x` at `t` into `out`. False when the step's propagator cannot be built. */
   step(t: number, h: number, x: Float64Array, out: Float64Array): boolean {
-    const propagator = this.propagatorFor(h);
+    const propagator = this.propagatorFor(h, (this.end - t) / h);
     if (propagator === null) return false;
     this.steps++;
-    const tau = t - this.t0;
-    for (let r = 0; r < this.n; r++) this.p[r] = this.p0[r] + this.slope[r] * tau;
-    propagator.apply(x, this.p, this.slope, out);
+    propagator.prepare(this.stretches, this.p0, this.slope);
+    propagator.apply(x, t - this.t0, out);
     return true;
   }
 
@@ -219,9 +224,10 @@ export class LinearStretch {
 
   /**
    * The kept propagator for step h of the current system, or a new one in place of the least
-   * recently used; null when it cannot be built, or when builds have outrun the steps that pay for them.
+   * recently used; null when it cannot be built, or would not pay for itself (`uses`: steps of
+   * this size the stretch has left), or builds have outrun the steps that pay for them.
    */
-  private propagatorFor(h: number): Propagator | null {
+  private propagatorFor(h: number, uses: number): Propagator | null {
     this.clock++;
     let oldest = 0;
     for (let i = 0; i < this.kept.length; i++) {
@@ -232,7 +238,9 @@ export class LinearStretch {
       }
       if (k.used < this.kept[oldest].used) oldest = i;
     }
-    if (this.builds >= FREE_BUILDS + this.steps / STEPS_PER_BUILD) return null;
+    // A new one must pay for itself: enough steps left in this stretch, and within the budget.
+    if (uses < STEPS_PER_BUILD_PER_UNKNOWN * this.n && this.builds >= FREE_BUILDS) return null;
+    if (this.builds >= FREE_BUILDS + this.steps / (STEPS_PER_BUILD_PER_UNKNOWN * this.n)) return null;
     let entry = this.kept.length < KEPT ? undefined : this.kept[oldest];
     if (entry === undefined) {
       entry = { h, system: 0, propagator: new Propagator(this.n), used: 0 };

@@ -27,6 +27,10 @@ export class Propagator {
   readonly a: Float64Array;
   readonly b: Float64Array;
   readonly d: Float64Array;
+  /** The prepared stretch's constant and ramp terms, and its name (-1: none). */
+  private readonly u: Float64Array;
+  private readonly w: Float64Array;
+  private prepared = -1;
   /** Scratch for the build. */
   private readonly levels: { a: Float64Array; b: Float64Array; d: Float64Array }[];
   private readonly product: Float64Array;
@@ -40,6 +44,8 @@ export class Propagator {
     this.a = new Float64Array(n2);
     this.b = new Float64Array(n2);
     this.d = new Float64Array(n2);
+    this.u = new Float64Array(size);
+    this.w = new Float64Array(size);
     this.levels = Array.from({ length: LEVELS }, () => ({ a: new Float64Array(n2), b: new Float64Array(n2), d: new Float64Array(n2) }));
     this.product = new Float64Array(n2);
     this.matrix = new Float64Array(n2);
@@ -53,6 +59,7 @@ export class Propagator {
    * C/δ + G is singular (the caller keeps to trapezoidal steps).
    */
   build(g: Float64Array, c: Float64Array, h: number): boolean {
+    this.prepared = -1;
     for (let level = 0; level < LEVELS; level++) {
       const doublings = FINEST - level;
       if (!this.substep(g, c, h / 2 ** doublings, this.levels[level])) return false;
@@ -78,14 +85,37 @@ export class Propagator {
     return true;
   }
 
-  /** x(H) = A·x + B·p + D·q into `out` (which must not be `x`). */
-  apply(x: Float64Array, p: Float64Array, q: Float64Array, out: Float64Array): void {
+  /**
+   * Fix the drive of a stretch, p(τ) = p₀ + q·(τ - τ₀) with τ₀ its start: a step from τ is then
+   * x(τ + H) = A·x + u + (τ - τ₀)·w with u = B·p₀ + D·q and w = B·q, so that each step costs one
+   * product instead of three. `stretch` names the stretch: a second call for it does nothing.
+   */
+  prepare(stretch: number, p0: Float64Array, q: Float64Array): void {
+    if (stretch === this.prepared) return;
+    this.prepared = stretch;
     const n = this.size;
-    const { a, b, d } = this;
+    const { b, d } = this;
     for (let r = 0; r < n; r++) {
       const row = r * n;
-      let s = 0;
-      for (let k = 0; k < n; k++) s += a[row + k] * x[k] + b[row + k] * p[k] + d[row + k] * q[k];
+      let u = 0;
+      let w = 0;
+      for (let k = 0; k < n; k++) {
+        u += b[row + k] * p0[k] + d[row + k] * q[k];
+        w += b[row + k] * q[k];
+      }
+      this.u[r] = u;
+      this.w[r] = w;
+    }
+  }
+
+  /** x(τ + H) = A·x + u + (τ - τ₀)·w into `out` (which must not be `x`), after `prepare`. */
+  apply(x: Float64Array, sinceStart: number, out: Float64Array): void {
+    const n = this.size;
+    const a = this.a;
+    for (let r = 0; r < n; r++) {
+      const row = r * n;
+      let s = this.u[r] + sinceStart * this.w[r];
+      for (let k = 0; k < n; k++) s += a[row + k] * x[k];
       out[r] = s;
     }
   }
