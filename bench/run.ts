@@ -2,7 +2,8 @@
 // (each target beside the ratio measured in this same run). Speed is shown here, never
 // asserted by a timed test. `pnpm bench WORD` runs only the sections whose title contains WORD;
 // `pnpm bench accuracy` prints error against references with the time (bench/accuracy.ts).
-import { frequencyResponse, parseCircuit, simulate, type SimulateOptions } from '@voltcast/core';
+import { readFileSync } from 'node:fs';
+import { frequencyResponse, noiseAnalysis, parseCircuit, simulate, type SimulateOptions } from '@voltcast/core';
 import { spawnSync } from 'node:child_process';
 import { fileURLToPath } from 'node:url';
 import { differentiatorIntoRails, linearNetwork, rcLadder } from './cases.ts';
@@ -198,6 +199,36 @@ const sections: { title: string; run(): void }[] = [
   {
     title: 'accuracy: error against references and CPU time, with odex as the peer',
     run: accuracyBench,
+  },
+  {
+    title: 'noise: 1 Hz to 1 MHz, 20 points per decade, and a run with noise (second run of each)',
+    run() {
+      // Per point one complex factorization and one adjoint solve per output, whatever the
+      // number of noise generators (one per resistor).
+      const cases = [
+        { name: 'RC ladder, 10 sections, 1 output', text: rcLadder(10, 1e-3) },
+        { name: 'RC ladder, 100 sections, 1 output', text: rcLadder(100, 1e-3) },
+      ];
+      console.log('  ' + 'case'.padEnd(52), 'points'.padStart(10), 'points/s'.padStart(12), 'seconds'.padStart(9), 'solves'.padStart(7));
+      for (const c of cases) {
+        const circuit = parseCircuit(c.text, { fileName: 'bench.yaml' });
+        const last = { ...circuit, recorded: circuit.recorded.slice(-1) };
+        noiseAnalysis(last, { to: 1e6, hints: false });
+        const start = performance.now();
+        const noise = noiseAnalysis(last, { to: 1e6, hints: false });
+        const seconds = (performance.now() - start) / 1000;
+        const points = noise.frequency.length;
+        console.log('  ' + c.name.padEnd(52), String(points).padStart(10), Math.round(points / seconds).toLocaleString('en-US').padStart(12), seconds.toFixed(3).padStart(9), String(noise.stats.solves).padStart(7));
+      }
+      // The leaf thermopile fixture for 50 ms with the parts' noise: the step is held to 1/(20·50 kHz).
+      const leaf = parseCircuit(readFileSync(new URL('../fixtures/noise-leaf-thermopile.yaml', import.meta.url), 'utf8'));
+      const short = { ...leaf, simulate: { ...leaf.simulate, duration: 0.05 } };
+      simulate(short, { noise: { seed: 1 } });
+      const start = performance.now();
+      const result = simulate(short, { noise: { seed: 1 } });
+      const seconds = (performance.now() - start) / 1000;
+      console.log(`  leaf thermopile, 50 ms with noise: ${result.stats.acceptedSteps} steps in ${seconds.toFixed(2)} s, ${Math.round(result.stats.acceptedSteps / seconds).toLocaleString('en-US')} steps/s`);
+    },
   },
   {
     title: 'parse: 10,001 parts (best of 5)',

@@ -5,6 +5,7 @@ import { checkCommand } from './commands/check.ts';
 import { envelopeCommand, type EnvelopeCommandOptions } from './commands/envelope.ts';
 import { compareCommand, type CompareCommandOptions } from './commands/compare.ts';
 import { responseCommand, type ResponseCommandOptions } from './commands/response.ts';
+import { noiseCommand, type NoiseCommandOptions } from './commands/noise.ts';
 
 const examples = `
 Examples:
@@ -16,6 +17,8 @@ Examples:
       write elsewhere and print nothing but errors
   voltcast response fixtures/differentiator-plain.yaml --plot
       gain, phase and loop margins; writes out/differentiator-plain-response/response.{csv,json,txt}
+  voltcast noise fixtures/noise-leaf-thermopile.yaml --plot
+      noise at each node and converter in LSB; writes out/noise-leaf-thermopile-noise/noise.{csv,json,txt}
   voltcast envelope fixtures/envelope-rc-filter.yaml --runs 500 --seed 7 --corners --plot
       tolerance envelope; writes out/envelope-rc-filter-envelope/envelope.csv
   voltcast compare capture.csv out/board-envelope/envelope.csv --signal adc --shift auto
@@ -43,6 +46,7 @@ export function program(setOutcome: (code: number) => void): Command {
     .option('-q, --quiet', 'no progress bar and no summary')
     .option('--plot', 'also write plot.svg: the waveforms and ADC codes')
     .option('--codes-as <formats>', "also write each ADC's codes as c-header and/or json (comma-separated), beside adc-NAME.csv")
+    .option('--noise [seed]', 'add seeded thermal and amplifier noise to every resistor and amplifier (same seed, same run; default seed 1)')
     .option('--force', "write into a folder that holds other files: voltcast's own files are replaced, every other file is left in place")
     .action((file: string, options: RunOptions) => runCommand(file, options));
 
@@ -56,6 +60,16 @@ export function program(setOutcome: (code: number) => void): Command {
     .option('-q, --quiet', 'no summary')
     .option('--force', "write into a folder that holds other files: voltcast's own files are replaced, every other file is left in place")
     .action((file: string, options: ResponseCommandOptions) => responseCommand(file, options));
+
+  root
+    .command('noise')
+    .description('noise at every node and converter: noise.csv, noise.json and noise.txt, largest contributor first')
+    .argument('<file>', 'circuit file (YAML); the band is its noise: section, or 1 Hz to the highest ADC Nyquist rate')
+    .option('-o, --out <dir>', 'output folder (default: out/<file name>-noise)')
+    .option('--plot', 'also write plot.svg: noise density against log frequency, stacked by contributor')
+    .option('-q, --quiet', 'no summary')
+    .option('--force', "write into a folder that holds other files: voltcast's own files are replaced, every other file is left in place")
+    .action((file: string, options: NoiseCommandOptions) => noiseCommand(file, options));
 
   root
     .command('envelope')

@@ -21,6 +21,8 @@ export interface RunReport extends Findings {
   readonly recorded: Record<string, { min: number; max: number; final: number }>;
   /** Seconds of wall-clock time the simulation and the analyses took. */
   readonly wallTime: CircuitRun['wallTime'];
+  /** Present when the run added the parts' noise (`run --noise`): its seed. */
+  readonly noise?: { readonly seed: number };
 }
 
 /**
@@ -69,6 +71,7 @@ export function reportText(report: RunReport): string {
       ['accuracy, volts', formatSI(settings.accuracy.volts, 'V')],
       ['accuracy, amps', formatSI(settings.accuracy.amps, 'A')],
       ['temperature', `${settings.temperature} °C`],
+      ...(report.noise !== undefined ? [['noise of the parts, seed', String(report.noise.seed)]] : []),
     ]),
     '',
     'work',

@@ -1,6 +1,6 @@
 /**
  * voltcast core: circuit files, modified nodal analysis, trapezoidal transient analysis,
- * frequency response and loop stability, op-amp macro-model and ADC prediction. No file
+ * frequency response and loop stability, noise, op-amp macro-model and ADC prediction. No file
  * system or process access: runs in Node, a worker or a browser. The host supplies file
  * contents through `readFile` callbacks.
  *
@@ -28,6 +28,7 @@ export type { Quantity } from './units/quantity.ts';
 // Running a circuit, and what a run returns.
 export { simulate } from './transient/simulate.ts';
 export type { TransientResult, RunStats, SimulateOptions } from './transient/result.ts';
+export type { TransientNoise } from './transient/noise-injection.ts';
 export type { StepObserver, ObserverContext } from './transient/observer.ts';
 export { SimulationError } from './transient/simulation-error.ts';
 export { runCircuit } from './analysis/run-circuit.ts';
@@ -46,6 +47,11 @@ export type { NodeResponse, LoopResponse, ResponsePeak, AmplifierState } from '.
 export type { SmallSignalStats } from './small-signal/linearized-circuit.ts';
 export type { ResponseSettings } from './circuit/circuit.ts';
 
+// Noise at every recorded node and converter, linearized at the t = 0 operating point.
+export { noiseAnalysis } from './analysis/noise/noise-analysis.ts';
+export type { NoiseAnalysis, NoiseOptions, NoiseBandUsed, NoiseContribution, OutputNoiseFigures, AdcNoise } from './analysis/noise/types.ts';
+export type { NoiseBand } from './circuit/circuit.ts';
+
 // Tolerance envelopes and comparing captures against them.
 export { envelope, envelopePlan, runVariants, assembleEnvelope } from './analysis/envelope/envelope.ts';
 export type { Envelope, AdcEnvelope, EnvelopeOptions, EnvelopePlan } from './analysis/envelope/envelope.ts';
@@ -62,7 +68,7 @@ export type { OpampParameters, OpampPresetName } from './parts/opamp-presets.ts'
 
 // The protocols a part kind or a wave implements (see DEVELOPERS.md), and the built-in ones.
 export { partKinds } from './parts/index.ts';
-export type { PartKind, PartSpecBase, PinRef, Conditions, Device, Binder, Mna, ComplexMna, GainStage, StepInfo, Method, Link, OpenPin } from './parts/index.ts';
+export type { PartKind, PartSpecBase, PinRef, Conditions, Device, Binder, Mna, ComplexMna, GainStage, NoiseSource, StepInfo, Method, Link, OpenPin } from './parts/index.ts';
 export type { TolerableValue } from './parts/tolerance.ts';
 export { waveKinds } from './waves/index.ts';
 export type { Wave, WaveKind } from './waves/wave.ts';

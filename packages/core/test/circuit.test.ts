@@ -84,7 +84,7 @@ describe('errors say what, where and what to do', () => {
   it('an unknown key with nothing near lists the known keys', () => {
     const issue = only(`${filter}zzz: {}\n`);
     expect(issue.message).toBe("unknown key 'zzz'");
-    expect(issue.hint).toBe('keys known here: circuit, parts, simulate, record, adc, response');
+    expect(issue.hint).toBe('keys known here: circuit, parts, simulate, record, adc, response, noise');
   });
 
   it('a duplicate part name points at the second one and names the first', () => {

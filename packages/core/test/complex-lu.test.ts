@@ -3,11 +3,34 @@ import { Matrix, solve } from 'ml-matrix';
 import { ComplexLu } from '../src/small-signal/complex-lu.ts';
 import { uniformNoise } from './support/lcg.ts';
 
+/** A (or Aᵀ) + jB as the real system [[A, -B], [B, A]] of twice the size. */
+function realEquivalent(aRe: Float64Array, aIm: Float64Array, n: number, transposed: boolean): Matrix {
+  return new Matrix(
+    Array.from({ length: 2 * n }, (_, r) =>
+      Array.from({ length: 2 * n }, (_, c) => {
+        const [i, j] = transposed ? [c % n, r % n] : [r % n, c % n];
+        const re = aRe[i * n + j];
+        const im = aIm[i * n + j];
+        return r < n ? (c < n ? re : -im) : c < n ? im : re;
+      }),
+    ),
+  );
+}
+
 describe('complex LU against ml-matrix (reference library from the npm registry)', () => {
   // (A + jB)(x + jy) = c + jd is the real system [[A, -B], [B, A]]·[x; y] = [c; d] of twice
   // the size (a textbook identity), which ml-matrix solves.
-  it.each([1, 3, 8, 30])('solves a random complex system of size %i like ml-matrix on the real equivalent, within 1e-10', (n) => {
-    const random = uniformNoise(100 + n);
+  // Aᵀ's real equivalent is the transpose of A's: the same identity checks the adjoint solve.
+  it.each([
+    [1, false],
+    [3, false],
+    [8, false],
+    [30, false],
+    [1, true],
+    [4, true],
+    [12, true],
+  ])('solves a random complex system of size %i (transposed: %s) like ml-matrix on the real equivalent, within 1e-10', (n, transposed) => {
+    const random = uniformNoise((transposed ? 300 : 100) + n);
     const aRe = Float64Array.from({ length: n * n }, random);
     const aIm = Float64Array.from({ length: n * n }, random);
     const bRe = Float64Array.from({ length: n }, random);
@@ -16,16 +39,9 @@ describe('complex LU against ml-matrix (reference library from the npm registry)
     expect(lu.factor(aRe, aIm)).toBe(-1);
     const xRe = new Float64Array(n);
     const xIm = new Float64Array(n);
-    lu.solve(bRe, bIm, xRe, xIm);
-    const real = Array.from({ length: 2 * n }, (_, r) =>
-      Array.from({ length: 2 * n }, (_, c) => {
-        const [i, j] = [r % n, c % n];
-        const re = aRe[i * n + j];
-        const im = aIm[i * n + j];
-        return r < n ? (c < n ? re : -im) : c < n ? im : re;
-      }),
-    );
-    const reference = solve(new Matrix(real), Matrix.columnVector([...bRe, ...bIm]));
+    if (transposed) lu.solveTransposed(bRe, bIm, xRe, xIm);
+    else lu.solve(bRe, bIm, xRe, xIm);
+    const reference = solve(realEquivalent(aRe, aIm, n, transposed), Matrix.columnVector([...bRe, ...bIm]));
     for (let i = 0; i < n; i++) {
       expect(Math.abs(xRe[i] - reference.get(i, 0))).toBeLessThan(1e-10 * Math.max(1, Math.abs(reference.get(i, 0))));
       expect(Math.abs(xIm[i] - reference.get(n + i, 0))).toBeLessThan(1e-10 * Math.max(1, Math.abs(reference.get(n + i, 0))));

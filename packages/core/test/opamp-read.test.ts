@@ -35,6 +35,14 @@ describe('reading op-amps', () => {
     expect(s.parameters.offset).toBe(2e-3); // the jfet-input preset's
   });
 
+  it('noise figures take densities with their units, and a bad unit is named', () => {
+    const s = spec("{ opamp: { preset: precision, noise-voltage: 4.5nV/√Hz, noise-corner: 2Hz, noise-current: 0.4pA/rtHz }, plus: in, minus: out, out: out, supply: [-5, 5] }");
+    expect([s.parameters.noiseVoltage, s.parameters.noiseCorner, s.parameters.noiseCurrent]).toEqual([4.5e-9, 2, 0.4e-12]);
+    expect(spec('{ opamp: general-purpose, plus: in, minus: out, out: out, supply: [-5, 5] }').parameters.noiseVoltage).toBe(20e-9);
+    const [issue] = errors('{ opamp: { preset: precision, noise-voltage: 4nA/√Hz }, plus: in, minus: out, out: out, supply: [-5, 5] }');
+    expect(issue.message).toBe("'4nA/√Hz' is not a voltage noise density: A/√Hz is a unit of current noise density");
+  });
+
   it('supplies may be node names', () => {
     const s = spec('{ opamp: rail-to-rail, plus: in, minus: out, out: out, supply: [gnd, in] }');
     expect(s.supply).toEqual([{ node: 'gnd' }, { node: 'in' }]);

@@ -23,20 +23,22 @@ describe('the public surface of @voltcast/core', () => {
         // numbers
         'parseQuantity', 'formatSI', 'ParsedQuantity', 'quantities', 'Quantity',
         // running
-        'simulate', 'TransientResult', 'RunStats', 'SimulateOptions', 'StepObserver', 'ObserverContext', 'SimulationError',
+        'simulate', 'TransientResult', 'RunStats', 'SimulateOptions', 'TransientNoise', 'StepObserver', 'ObserverContext', 'SimulationError',
         'runCircuit', 'CircuitRun', 'RunOptions', 'Findings', 'FindingsOptions', 'FindingsStats', 'Hint',
         'SaturationInterval', 'SlewInterval', 'CurrentLimitInterval', 'Interval', 'SaturationOptions',
         'RingingFinding', 'RingingOptions', 'RingingEvent', 'ReportWarning', 'AdcReadout', 'AdcReport', 'ClippedSamples', 'CodeError', 'TimeInterval',
         // frequency response
         'frequencyResponse', 'FrequencyResponse', 'ResponseOptions', 'LoopFinding', 'ResponseWarning', 'NodeResponse', 'LoopResponse', 'ResponsePeak',
         'AmplifierState', 'SmallSignalStats', 'ResponseSettings',
+        // noise
+        'noiseAnalysis', 'NoiseAnalysis', 'NoiseOptions', 'NoiseBandUsed', 'NoiseContribution', 'OutputNoiseFigures', 'AdcNoise', 'NoiseBand',
         // envelopes and compare
         'envelope', 'envelopePlan', 'runVariants', 'assembleEnvelope', 'Envelope', 'AdcEnvelope', 'EnvelopeOptions', 'EnvelopePlan', 'ToleranceSlot',
         'mergeBounds', 'EnvelopeBounds', 'compare', 'Trace', 'EnvelopeTrace', 'CompareOptions', 'Comparison', 'Violation', 'Tolerance', 'Distribution',
         // op-amp classes
         'opampPresets', 'opampPresetNames', 'OpampParameters', 'OpampPresetName',
         // extension protocols
-        'partKinds', 'PartKind', 'PartSpecBase', 'PinRef', 'Conditions', 'Device', 'Binder', 'Mna', 'ComplexMna', 'GainStage', 'StepInfo', 'Method', 'Link', 'OpenPin', 'TolerableValue',
+        'partKinds', 'PartKind', 'PartSpecBase', 'PinRef', 'Conditions', 'Device', 'Binder', 'Mna', 'ComplexMna', 'GainStage', 'NoiseSource', 'StepInfo', 'Method', 'Link', 'OpenPin', 'TolerableValue',
         'waveKinds', 'Wave', 'WaveKind', 'ValueReader', 'MapReader', 'ReadContext', 'NumberLimits',
       ].sort(),
     );

@@ -2,6 +2,7 @@ import { writeFileSync } from 'node:fs';
 import { basename, extname, join } from 'node:path';
 import { runCircuit, type CircuitRun } from '@voltcast/core';
 import { readCircuitFile } from '../read-circuit-file.ts';
+import { InputError } from '../exit-codes.ts';
 import { writeOutputDir } from '../output/output-dir.ts';
 import { WaveformCsv } from '../waveform-csv.ts';
 import { ExtremesTracker } from '../node-extremes.ts';
@@ -23,6 +24,8 @@ export interface RunOptions {
   codesAs?: string;
   /** Write into a folder that holds other files, beside them (voltcast's own files are replaced). */
   force?: boolean;
+  /** Add the parts' noise: `true` (seed 1) or the seed as typed. */
+  noise?: boolean | string;
 }
 
 /** `voltcast run FILE`: simulate, stream `waveforms.csv`, write the reports, print a summary. */
@@ -31,6 +34,7 @@ export async function runCommand(file: string, options: RunOptions): Promise<voi
   for (const warning of warnings) console.error(warning);
   const outDir = options.out ?? defaultOutDir(fileName);
   const codeFormats = parseCodeFormats(options.codesAs ?? '');
+  const noise = noiseOption(options.noise);
   const progress = new RunProgress(circuit.simulate.duration, !options.quiet);
   const startedAt = performance.now();
 
@@ -46,12 +50,14 @@ export async function runCommand(file: string, options: RunOptions): Promise<voi
           extremes.add(values);
         },
         onProgress: (fraction) => progress.update(fraction),
+        ...(noise !== undefined ? { noise } : {}),
       });
     } finally {
       progress.stop();
       csv.close();
     }
-    const report = buildReport(fileName, run, extremes.results());
+    const built = buildReport(fileName, run, extremes.results());
+    const report = noise !== undefined ? { ...built, noise } : built;
     const adcFiles = writeAdcFiles(staging, circuit.name, run.adcs, codeFormats);
     const names = ['waveforms.csv', ...adcFiles, ...writeReport(staging, report).map((path) => basename(path))];
     if (options.plot) {
@@ -65,6 +71,14 @@ export async function runCommand(file: string, options: RunOptions): Promise<voi
     const wallSeconds = (performance.now() - startedAt) / 1000;
     console.log(runSummary(report, circuit, wallSeconds, files.map((name) => join(outDir, name))));
   }
+}
+
+function noiseOption(value: boolean | string | undefined): { seed: number } | undefined {
+  if (value === undefined || value === false) return undefined;
+  if (value === true) return { seed: 1 };
+  const seed = Number(value);
+  if (!(Number.isInteger(seed) && seed >= 0 && seed < 2 ** 31)) throw new InputError(`voltcast run: --noise ${value} is not a seed\n  write a whole number from 0 to 2147483647, e.g. --noise 7, or --noise alone for seed 1`);
+  return { seed };
 }
 
 function defaultOutDir(file: string): string {

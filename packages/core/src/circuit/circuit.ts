@@ -39,6 +39,20 @@ export interface ResponseSettings {
   readonly perDecade: number;
 }
 
+/**
+ * `noise:`: the band `voltcast noise` and `noiseAnalysis` integrate over. Each key is optional;
+ * an absent one takes its default where the band is used (1 Hz; the highest converter's
+ * Nyquist rate or 1 MHz; 20 per decade), since the defaults depend on the `adc:` section.
+ */
+export interface NoiseBand {
+  /** Lowest frequency, Hz. */
+  readonly from?: number;
+  /** Highest frequency, Hz. */
+  readonly to?: number;
+  /** Log-spaced points per decade. */
+  readonly perDecade?: number;
+}
+
 /** A validated circuit: what the parser returns and what `simulate` takes. */
 export interface Circuit {
   readonly name: string;
@@ -52,6 +66,8 @@ export interface Circuit {
   readonly adcs: readonly AdcSpec[];
   /** The `response:` section, when the file has one. */
   readonly response?: ResponseSettings;
+  /** The `noise:` section, when the file has one. */
+  readonly noise?: NoiseBand;
 }
 
 /** Defaults for `simulate:` keys the file leaves out. */

@@ -13,6 +13,8 @@ import { suggestion } from '../reading/suggest.ts';
 import { partKinds } from '../parts/index.ts';
 import { readAdcSection } from './read-adc.ts';
 import { readResponseSection } from './read-response.ts';
+import { readNoiseSection } from './read-noise.ts';
+import { checkNoiseBand } from './noise-band.ts';
 import type { PartSpecBase } from '../parts/part-kind.ts';
 import { quantities } from '../units/quantity.ts';
 import { formatSI } from '../units/format.ts';
@@ -84,10 +86,12 @@ function readDocument(tree: YamlNode, sink: IssueSink, context: ReadContext, sta
   const recordValue = top.get('record');
   const adcValue = top.get('adc');
   const response = readResponseSection(top.get('response'), parts.specs);
+  const noise = readNoiseSection(top.get('noise'));
   top.finish();
 
   // A converter's sampling adds parts (switch, capacitor) and nodes of its own.
   const adc = readAdcSection(adcValue, nodesInOrder(parts.specs), simulate.duration);
+  if (noise !== undefined) checkNoiseBand(top.get('noise'), noise, adc.adcs);
   const specs = [...parts.specs, ...adc.parts];
   const nodes = nodesInOrder(specs);
   const recorded = recordValue === undefined ? nodes : readRecord(recordValue, nodes);
@@ -99,7 +103,7 @@ function readDocument(tree: YamlNode, sink: IssueSink, context: ReadContext, sta
   if (parts.complete && !sink.issues.some((issue) => issue.severity === 'error')) checkOpenPins(specs, simulate, sink);
 
   if (sink.issues.some((issue) => issue.severity === 'error')) return { issues: sink.issues };
-  const circuit: Circuit = { name, parts: specs, simulate, recorded, nodes, adcs: adc.adcs, ...(response !== undefined ? { response } : {}) };
+  const circuit: Circuit = { name, parts: specs, simulate, recorded, nodes, adcs: adc.adcs, ...(response !== undefined ? { response } : {}), ...(noise !== undefined ? { noise } : {}) };
   return { circuit, issues: sink.issues };
 }
 

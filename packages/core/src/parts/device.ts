@@ -33,6 +33,11 @@
  *    phase, for the source named as the response's input.
  * 9. `gainStage`, amplifiers only: the controlled source inside the device where the loop-gain
  *    analysis breaks the loop to measure its return ratio, linearized at `x`.
+ * 10. `noiseSources`, parts that make noise: each noise generator as a current between two
+ *    unknowns with its one-sided density at the operating point `x` and `kelvin` (a
+ *    resistor's 4kT/R; an amplifier's input voltage noise as the current it makes its gain
+ *    stage deliver). The noise analysis finds each one's way to the outputs; the transient
+ *    with noise drives each one with a seeded random current of that density.
  *
  * A device without `stampSmallSignal` makes the small-signal analyses refuse the circuit
  * with a message naming it.
@@ -73,6 +78,24 @@ export interface Device {
   stampTestSignal?(m: ComplexMna): void;
   /** Where to break an amplifier's loop for its return ratio, at the operating point `x` (contract item 9). */
   gainStage?(x: Float64Array): GainStage;
+  /** The device's noise generators at the operating point `x` and temperature `kelvin` (contract item 10). */
+  noiseSources?(x: Float64Array, kelvin: number): readonly NoiseSource[];
+}
+
+/**
+ * One noise generator of a device: a random current entering unknown `into` and leaving
+ * `from` (-1 is ground), uncorrelated with every other, whose one-sided power density is
+ * `white · (1 + corner / f)` in A²/Hz: white above `corner`, rising as 1/f below it.
+ */
+export interface NoiseSource {
+  /** What makes it, for reports: `thermal`, `voltage`, `current at plus`, ... */
+  readonly source: string;
+  readonly into: number;
+  readonly from: number;
+  /** A²/Hz. */
+  readonly white: number;
+  /** The 1/f corner, Hz; 0 for white noise alone. */
+  readonly corner: number;
 }
 
 /**

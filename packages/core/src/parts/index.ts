@@ -10,7 +10,7 @@ import { timedSwitch } from './switch.ts';
 import { diode } from './diode.ts';
 import { comparator } from './comparator.ts';
 
-export type { Device, Binder, Mna, ComplexMna, GainStage, StepInfo, Method, Link, OpenPin } from './device.ts';
+export type { Device, Binder, Mna, ComplexMna, GainStage, NoiseSource, StepInfo, Method, Link, OpenPin } from './device.ts';
 export type { PartKind, PartSpecBase, PinRef, Conditions } from './part-kind.ts';
 
 /** Every part kind, by its YAML key. Adding a kind: one file and one line here. */

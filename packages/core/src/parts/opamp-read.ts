@@ -31,6 +31,9 @@ function readParameters(main: ValueReader): { preset: OpampPresetName; parameter
     bias: m.numberOr('bias', quantities.current, base.bias),
     ...optional(m, 'second-pole', 'secondPole', quantities.frequency, base.secondPole),
     ...optional(m, 'current-limit', 'currentLimit', quantities.current, base.currentLimit),
+    noiseVoltage: m.numberOr('noise-voltage', quantities.voltageDensity, base.noiseVoltage, { min: 0 }),
+    noiseCorner: m.numberOr('noise-corner', quantities.frequency, base.noiseCorner, { min: 0 }),
+    noiseCurrent: m.numberOr('noise-current', quantities.currentDensity, base.noiseCurrent, { min: 0 }),
   };
   if (parameters.currentLimit !== undefined && parameters.rout === 0) {
     (m.get('current-limit') ?? m.get('rout') ?? main).fail('a current limit needs an output resistance above 0', 'set `rout:` (tens of ohms is typical) or remove `current-limit`');

@@ -1,7 +1,7 @@
 import { stampAdmittance, stampBranchIncidence, stampConductance, stampCurrent, stampTransconductance } from './stamps.ts';
 import { CapacitorCompanion } from './capacitor-companion.ts';
 import { across, valueAt } from './solution.ts';
-import type { Binder, ComplexMna, Device, GainStage, Link, Mna, StepInfo } from './device.ts';
+import type { Binder, ComplexMna, Device, GainStage, Link, Mna, NoiseSource, StepInfo } from './device.ts';
 import type { PartKind } from './part-kind.ts';
 import { nodeOf } from './pins.ts';
 import { readOpamp } from './opamp-read.ts';
@@ -17,7 +17,7 @@ export type { OpampSpec, OpampStatus, Supply } from './opamp-spec.ts';
  */
 export const opamp: PartKind<OpampSpec> = {
   key: 'opamp',
-  summary: 'op-amp macro-model: `opamp: <preset>` or `{ preset, gain, gbw, slew, headroom, rout, offset, bias, second-pole, current-limit }`, `plus`, `minus`, `out`, `supply: [low, high]`',
+  summary: 'op-amp macro-model: `opamp: <preset>` or `{ preset, gain, gbw, slew, headroom, rout, offset, bias, second-pole, current-limit, noise-voltage, noise-corner, noise-current }`, `plus`, `minus`, `out`, `supply: [low, high]`',
   read: readOpamp,
   create: (spec) => new OpampDevice(spec),
   tolerable: opampTolerable,
@@ -197,6 +197,22 @@ class OpampDevice implements Device {
 
   gainStage(x: Float64Array): GainStage {
     return { into: this.n1, from: -1, p: this.p, n: this.m, transconductance: this.inputSlope(x), output: this.out };
+  }
+
+  /**
+   * Input voltage noise en in series with the plus input makes the gain stage deliver g·en
+   * into the gain node (the macro-model's input draws no current, so that is the whole
+   * effect); current noise in flows into each input that is not ground.
+   */
+  noiseSources(x: Float64Array): readonly NoiseSource[] {
+    const q = this.spec.parameters;
+    const sources: NoiseSource[] = [];
+    if (q.noiseVoltage > 0) sources.push({ source: 'voltage', into: this.n1, from: -1, white: (this.inputSlope(x) * q.noiseVoltage) ** 2, corner: q.noiseCorner });
+    if (q.noiseCurrent > 0) {
+      if (this.p >= 0) sources.push({ source: 'current at plus', into: this.p, from: -1, white: q.noiseCurrent ** 2, corner: 0 });
+      if (this.m >= 0) sources.push({ source: 'current at minus', into: this.m, from: -1, white: q.noiseCurrent ** 2, corner: 0 });
+    }
+    return sources;
   }
 
   /** Output current i = Ilim·tanh(v/(rout·Ilim)) from drive to out, linearized; true when limited. */

@@ -1,6 +1,7 @@
 import { quantities } from '../units/quantity.ts';
 import { stampConductance } from './stamps.ts';
-import type { Binder, ComplexMna, Device, Link, Mna } from './device.ts';
+import { BOLTZMANN } from '../units/constants.ts';
+import type { Binder, ComplexMna, Device, Link, Mna, NoiseSource } from './device.ts';
 import type { PartKind, PartSpecBase } from './part-kind.ts';
 import { tolerableField } from './tolerance.ts';
 import { nodeOf, readBetween } from './pins.ts';
@@ -42,6 +43,10 @@ class ResistorDevice implements Device {
   }
   stampSmallSignal(m: ComplexMna): void {
     this.stampStatic(m);
+  }
+  /** Johnson–Nyquist thermal noise: a current of density 4kT/R across the resistor. */
+  noiseSources(_x: Float64Array, kelvin: number): readonly NoiseSource[] {
+    return [{ source: 'thermal', into: this.a, from: this.b, white: (4 * BOLTZMANN * kelvin) / this.spec.resistance, corner: 0 }];
   }
   links(): readonly Link[] {
     return [{ a: this.a, b: this.b, kind: 'conductive' }];

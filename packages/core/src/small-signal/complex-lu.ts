@@ -102,12 +102,60 @@ export class ComplexLu {
         sRe -= re[row + c] * xRe[c] - im[row + c] * xIm[c];
         sIm -= re[row + c] * xIm[c] + im[row + c] * xRe[c];
       }
-      const dRe = re[row + r];
-      const dIm = im[row + r];
-      const d = dRe * dRe + dIm * dIm;
-      xRe[r] = (sRe * dRe + sIm * dIm) / d;
-      xIm[r] = (sIm * dRe - sRe * dIm) / d;
+      this.divideByPivot(r, sRe, sIm, xRe, xIm);
     }
+  }
+
+  /**
+   * Solve the transposed system with the last factorization: `x = (Aᵀ)⁻¹·b` (the plain
+   * transpose, not the conjugate). With `b` a unit vector at an output, `x` holds that
+   * output's response to a unit current injected at every unknown: the adjoint solve, one
+   * per output instead of one per source. `b` is left unchanged; `x` may not be `b`.
+   */
+  solveTransposed(bRe: Float64Array, bIm: Float64Array, xRe: Float64Array, xIm: Float64Array): void {
+    const n = this.size;
+    const re = this.re;
+    const im = this.im;
+    const yRe = this.yRe;
+    const yIm = this.yIm;
+    // PA = LU, so Aᵀ = Uᵀ·Lᵀ·P: solve Uᵀ·w = b forward, then Lᵀ·v = w backward, then x = Pᵀ·v.
+    for (let r = 0; r < n; r++) {
+      let sRe = bRe[r];
+      let sIm = bIm[r];
+      for (let c = 0; c < r; c++) {
+        const uRe = re[c * n + r];
+        const uIm = im[c * n + r];
+        sRe -= uRe * yRe[c] - uIm * yIm[c];
+        sIm -= uRe * yIm[c] + uIm * yRe[c];
+      }
+      this.divideByPivot(r, sRe, sIm, yRe, yIm);
+    }
+    for (let r = n - 1; r >= 0; r--) {
+      let sRe = yRe[r];
+      let sIm = yIm[r];
+      for (let c = r + 1; c < n; c++) {
+        const lRe = re[c * n + r];
+        const lIm = im[c * n + r];
+        sRe -= lRe * yRe[c] - lIm * yIm[c];
+        sIm -= lRe * yIm[c] + lIm * yRe[c];
+      }
+      yRe[r] = sRe;
+      yIm[r] = sIm;
+    }
+    for (let r = 0; r < n; r++) {
+      xRe[this.perm[r]] = yRe[r];
+      xIm[this.perm[r]] = yIm[r];
+    }
+  }
+
+  /** (sRe + j·sIm) / U[r][r] into entry `r` of `outRe + j·outIm`. */
+  private divideByPivot(r: number, sRe: number, sIm: number, outRe: Float64Array, outIm: Float64Array): void {
+    const k = r * this.size + r;
+    const dRe = this.re[k];
+    const dIm = this.im[k];
+    const d = dRe * dRe + dIm * dIm;
+    outRe[r] = (sRe * dRe + sIm * dIm) / d;
+    outIm[r] = (sIm * dRe - sRe * dIm) / d;
   }
 }
 

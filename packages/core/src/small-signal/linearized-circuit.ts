@@ -97,6 +97,15 @@ export class LinearizedCircuit {
     this.stats.solves++;
   }
 
+  /**
+   * Solve the last factored system transposed for `b` (the adjoint solve): with `b` picking
+   * an output, `x[k]` is that output per unit current injected into unknown `k`.
+   */
+  solveTransposed(bRe: Float64Array, bIm: Float64Array, xRe: Float64Array, xIm: Float64Array): void {
+    this.lu.solveTransposed(bRe, bIm, xRe, xIm);
+    this.stats.solves++;
+  }
+
   /** Node voltages at `frequency` per 1 V (1 A) of the input source's test signal. */
   respond(frequency: number, input: Device, xRe: Float64Array, xIm: Float64Array): void {
     input.stampTestSignal!(this.factorAt(frequency));

@@ -4,6 +4,8 @@ import { createDevices } from '../circuit/devices.ts';
 import { Topology } from '../solver/topology.ts';
 import { Equations, type MatrixStorage } from './equations.ts';
 import type { RunStats } from './result.ts';
+import { NoiseInjection } from './noise-injection.ts';
+import { kelvin } from '../units/constants.ts';
 
 /** Newton iterations before a step is cut (or the operating point tries its next strategy). */
 const NEWTON_ITERATIONS = 40;
@@ -34,12 +36,14 @@ export function newRunStats(): RunStats {
 
 /**
  * Make the devices of `circuit`, bind them and set up their equations with the Newton limits
- * its `accuracy` asks for, on the matrix `storage` (by size unless forced). The transient
+ * its `accuracy` asks for, on the matrix `storage` (by size unless forced), with the parts'
+ * `noise` injected when asked (transient only). The transient
  * and the small-signal analyses start here, so both see the same operating point.
  */
-export function circuitEquations(circuit: Circuit, stats: RunStats, storage?: MatrixStorage): CircuitEquations {
+export function circuitEquations(circuit: Circuit, stats: RunStats, storage?: MatrixStorage, noise?: { seed: number; bandwidth: number }): CircuitEquations {
   const settings = circuit.simulate;
   const devices = createDevices(circuit.parts, settings);
+  if (noise !== undefined) devices.push(new NoiseInjection([...devices], noise.seed, noise.bandwidth, kelvin(settings.temperature)));
   const topology = new Topology(circuit.nodes);
   for (const device of devices) device.bind(topology);
   const equations = new Equations(

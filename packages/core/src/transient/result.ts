@@ -1,4 +1,5 @@
 import type { StepObserver } from './observer.ts';
+import type { TransientNoise } from './noise-injection.ts';
 
 /** Work counters, kept for every run (as a mature ODE suite keeps them). */
 export interface RunStats {
@@ -57,4 +58,10 @@ export interface SimulateOptions {
    * instead of exactly: for comparing the two. Default true.
    */
   exactSteps?: boolean;
+  /**
+   * Seeded noise of every resistor (4kTR) and amplifier (input voltage and current noise,
+   * white part) as currents in the run, band-limited and resolved by the steps: the step is
+   * held to 1/(20·bandwidth). Absent: no noise.
+   */
+  noise?: TransientNoise;
 }

@@ -12,6 +12,8 @@ import { SimulationError } from './simulation-error.ts';
 import { TruncationError } from './truncation-error.ts';
 import { LinearStretch } from './linear-stretch.ts';
 import { formatSI } from '../units/format.ts';
+import { noiseBandOf } from '../circuit/noise-band.ts';
+import { noiseMaxStep } from './noise-injection.ts';
 
 /** Fraction of the step before a corner used for the first (backward-Euler) step after it. */
 const FIRST_STEP_FRACTION = 1e-3;
@@ -46,11 +48,12 @@ const EXACT_RETRY_MOST = 4096;
 export function simulate(circuit: Circuit, options: SimulateOptions = {}): TransientResult {
   const settings = circuit.simulate;
   const stats = newRunStats();
-  const { devices, topology, equations } = circuitEquations(circuit, stats, options.matrix);
+  const noise = options.noise !== undefined ? { seed: options.noise.seed, bandwidth: options.noise.bandwidth ?? noiseBandOf(circuit).to } : undefined;
+  const { devices, topology, equations } = circuitEquations(circuit, stats, options.matrix, noise);
   const n = equations.size;
   const duration = settings.duration;
   const fixed = settings.fixedStep;
-  const maxStep = Math.min(settings.maxStep, duration);
+  const maxStep = Math.min(settings.maxStep, duration, noise !== undefined ? noiseMaxStep(noise.bandwidth) : Infinity);
   /** Times closer than this are the same instant. */
   const eps = duration * 1e-12;
   const floor = Math.max(duration * 1e-14, 1e-18);

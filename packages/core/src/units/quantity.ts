@@ -29,6 +29,10 @@ export const quantities = {
   angle: { name: 'angle', units: ['°', 'deg'] },
   /** Degrees Celsius (`simulate: temperature`). */
   temperature: { name: 'temperature', units: ['°C', 'degC'] },
+  /** Noise voltage density (an amplifier's `noise-voltage`). */
+  voltageDensity: { name: 'voltage noise density', units: ['V/√Hz', 'V/rtHz'] },
+  /** Noise current density (an amplifier's `noise-current`). */
+  currentDensity: { name: 'current noise density', units: ['A/√Hz', 'A/rtHz'] },
   /** A pure number (counts, bits); no unit, SI prefixes still allowed. */
   count: { name: 'number', units: [] },
 } as const satisfies Record<string, Quantity>;

@@ -21,6 +21,8 @@ const examples: Readonly<Record<string, string>> = {
   fraction: '0.5 or 50%',
   angle: '90 or 90°',
   temperature: '25 or 85°C',
+  'voltage noise density': '10n or 10nV/√Hz',
+  'current noise density': '1p or 1pA/√Hz',
   number: '12 or 20k',
 };
 

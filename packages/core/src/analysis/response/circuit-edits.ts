@@ -33,6 +33,7 @@ export function withSeriesResistor(circuit: Circuit, shape: Differentiator, resi
   return { ...circuit, parts: [...circuit.parts.map((p) => (p === cin ? moved : p)), added] };
 }
 
-function replaced(circuit: Circuit, part: PartSpecBase, change: object): Circuit {
+/** `circuit` with `part`'s spec changed by `change`; the circuit itself is untouched. */
+export function replaced(circuit: Circuit, part: PartSpecBase, change: object): Circuit {
   return { ...circuit, parts: circuit.parts.map((p) => (p === part ? { ...p, ...change } : p)) };
 }
