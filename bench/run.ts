@@ -154,6 +154,7 @@ const sections: { title: string; run(): void }[] = [
       const cases = [
         { name: 'RC ladder, 10 sections', text: rcLadder(10, 1e-3), input: 'SRC' },
         { name: 'RC ladder, 100 sections', text: rcLadder(100, 1e-3), input: 'SRC' },
+        { name: 'RC ladder, 1,000 sections (sparse complex system)', text: rcLadder(1000, 1e-3), input: 'SRC' },
         { name: 'op-amp differentiator, with margin hints', text: differentiatorIntoRails(1), input: 'SQ' },
       ];
       console.log('  ' + 'case'.padEnd(52), 'points'.padStart(10), 'points/s'.padStart(12), 'seconds'.padStart(9), 'LU'.padStart(7));
@@ -208,6 +209,7 @@ const sections: { title: string; run(): void }[] = [
       const cases = [
         { name: 'RC ladder, 10 sections, 1 output', text: rcLadder(10, 1e-3) },
         { name: 'RC ladder, 100 sections, 1 output', text: rcLadder(100, 1e-3) },
+        { name: 'RC ladder, 1,000 sections, 1 output', text: rcLadder(1000, 1e-3) },
       ];
       console.log('  ' + 'case'.padEnd(52), 'points'.padStart(10), 'points/s'.padStart(12), 'seconds'.padStart(9), 'solves'.padStart(7));
       for (const c of cases) {

@@ -6,8 +6,10 @@ import { circuitEquations, newRunStats } from '../transient/circuit-equations.ts
 import { solveOperatingPoint } from '../transient/operating-point.ts';
 import { SimulationError } from '../transient/simulation-error.ts';
 import { formatSI } from '../units/format.ts';
-import { ComplexLu } from './complex-lu.ts';
-import { ComplexSystem } from './complex-system.ts';
+import { SPARSE_FROM, type MatrixStorage } from '../transient/equations.ts';
+import type { ComplexSystem } from './complex-system.ts';
+import { DenseComplexSystem } from './dense-complex-system.ts';
+import { SparseComplexSystem } from './sparse-complex-system.ts';
 
 /** Work counters of a small-signal analysis. */
 export interface SmallSignalStats {
@@ -33,9 +35,9 @@ export class LinearizedCircuit {
   readonly operatingPoint: Float64Array;
   readonly stats: SmallSignalStats = { factorizations: 0, solves: 0 };
   private readonly system: ComplexSystem;
-  private readonly lu: ComplexLu;
 
-  constructor(circuit: Circuit) {
+  /** `storage`: the complex system's, chosen by size as the transient's matrix unless forced. */
+  constructor(circuit: Circuit, storage: MatrixStorage = 'auto') {
     const { devices, topology, equations } = circuitEquations(circuit, newRunStats());
     this.devices = devices;
     this.topology = topology;
@@ -46,8 +48,8 @@ export class LinearizedCircuit {
       const names = unmodelled.map((d) => `${d.name} (${d.kind})`).join(', ');
       throw new SimulationError(`${names} ha${unmodelled.length === 1 ? 's' : 've'} no small-signal model yet, so the circuit cannot be linearized there`, NaN, [], 'leave those parts out of a copy of the circuit for its frequency response', unmodelled.map((d) => d.name));
     }
-    this.system = new ComplexSystem(equations.size);
-    this.lu = new ComplexLu(equations.size);
+    const sparse = storage === 'auto' ? equations.size >= SPARSE_FROM : storage === 'sparse';
+    this.system = sparse ? new SparseComplexSystem(equations.size) : new DenseComplexSystem(equations.size);
   }
 
   get size(): number {
@@ -75,7 +77,7 @@ export class LinearizedCircuit {
       stampTransconductance(system, broken.into, broken.from, broken.p, broken.n, -broken.transconductance);
       stampCurrent(system, broken.from, broken.into, broken.transconductance);
     }
-    const singular = this.lu.factor(system.re, system.im);
+    const singular = system.factor();
     this.stats.factorizations++;
     if (singular >= 0) {
       const label = this.topology.labels[singular];
@@ -93,7 +95,7 @@ export class LinearizedCircuit {
 
   /** Solve the last factored system for its right-hand side into `xRe + j·xIm`. */
   solve(xRe: Float64Array, xIm: Float64Array): void {
-    this.lu.solve(this.system.bRe, this.system.bIm, xRe, xIm);
+    this.system.solve(xRe, xIm);
     this.stats.solves++;
   }
 
@@ -102,7 +104,7 @@ export class LinearizedCircuit {
    * an output, `x[k]` is that output per unit current injected into unknown `k`.
    */
   solveTransposed(bRe: Float64Array, bIm: Float64Array, xRe: Float64Array, xIm: Float64Array): void {
-    this.lu.solveTransposed(bRe, bIm, xRe, xIm);
+    this.system.solveTransposed(bRe, bIm, xRe, xIm);
     this.stats.solves++;
   }
 

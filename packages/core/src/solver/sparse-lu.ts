@@ -265,4 +265,25 @@ export class SparseLu implements Factorization {
     }
     for (let k = 0; k < n; k++) x[columnOrder[k]] = y[k];
   }
+
+  /**
+   * `x = (Aᵀ)⁻¹·b` with the last factorization (the adjoint solve). `P·A·Q = L·U`, so
+   * `Aᵀ = Q·Uᵀ·Lᵀ·P`: Uᵀ forward and Lᵀ backward, each column of U and L read as a row of
+   * its transpose (dot products, in the columns' stored order).
+   */
+  solveTransposed(b: Float64Array, x: Float64Array): void {
+    const { n, pivotRow, columnOrder, lStart, lRows, lValues, uStart, uRows, uValues, diagonal } = this;
+    const y = this.work;
+    for (let k = 0; k < n; k++) {
+      let s = b[columnOrder[k]];
+      for (let p = uStart[k]; p < uStart[k + 1]; p++) s -= uValues[p] * y[uRows[p]];
+      y[k] = s / diagonal[k];
+    }
+    for (let k = n - 1; k >= 0; k--) {
+      let s = y[k];
+      for (let p = lStart[k]; p < lStart[k + 1]; p++) s -= lValues[p] * y[lRows[p]];
+      y[k] = s;
+    }
+    for (let k = 0; k < n; k++) x[pivotRow[k]] = y[k];
+  }
 }

@@ -1,4 +1,4 @@
-import { Assembly, type Factorization } from './assembly.ts';
+import { Assembly } from './assembly.ts';
 import { SparsePattern } from './sparse-pattern.ts';
 import { SparseLu } from './sparse-lu.ts';
 
@@ -49,7 +49,7 @@ export class SparseSystem extends Assembly {
     this.pending.clear();
   }
 
-  factorization(): Factorization {
+  factorization(): SparseLu {
     return new SparseLu(this);
   }
 }
