@@ -364,15 +364,28 @@ describe('noise', () => {
     expect(good('{ noise: { rms: 50m, bandwidth: 10k, seed: 8 } }').value(3e-3)).not.toBe(forward[0]);
   });
 
-  it('has the stated rms, a Gaussian spread, and no power above its bandwidth', () => {
+  /** Power per frequency bin (Hann-windowed periodograms by fft.js averaged over `segments` of `size` samples at `dt`). */
+  function averagedSpectrum(wave: { value(t: number): number }, dt: number, size: number, segments: number): Float64Array {
+    const fft = new FFT(size);
+    const spectrum = fft.createComplexArray();
+    const power = new Float64Array(size / 2);
+    const windowed = new Array<number>(size);
+    for (let s = 0; s < segments; s++) {
+      for (let i = 0; i < size; i++) windowed[i] = wave.value((s * size + i) * dt) * (0.5 - 0.5 * Math.cos((2 * Math.PI * i) / size));
+      fft.realTransform(spectrum, windowed);
+      for (let k = 1; k < size / 2; k++) power[k] += spectrum[2 * k] ** 2 + spectrum[2 * k + 1] ** 2;
+    }
+    return power;
+  }
+
+  it('has the stated rms, a Gaussian spread, and no power from 1.25 × its bandwidth on', () => {
     const wave = good(text);
     const n = 1 << 16;
     const dt = 1 / 80e3; // 40 kHz Nyquist: room to see anything above 10 kHz
-    const samples = new Float64Array(n);
-    for (let i = 0; i < n; i++) samples[i] = wave.value(i * dt);
     let sumSquares = 0;
     let sumFourth = 0;
-    for (const v of samples) {
+    for (let i = 0; i < n; i++) {
+      const v = wave.value(i * dt);
       sumSquares += v * v;
       sumFourth += v ** 4;
     }
@@ -381,19 +394,32 @@ describe('noise', () => {
     expect(rms).toBeLessThan(0.05 * 1.05);
     // A Gaussian's kurtosis is 3 (any statistics textbook).
     expect(sumFourth / n / rms ** 4).toBeCloseTo(3, 0);
-    // Power spectrum by fft.js: everything below the bandwidth, apart from the window's leakage.
-    const fft = new FFT(n);
-    const spectrum = fft.createComplexArray();
-    const windowed = Array.from(samples, (v, i) => v * (0.5 - 0.5 * Math.cos((2 * Math.PI * i) / n)));
-    fft.realTransform(spectrum, windowed);
+    const size = 1 << 12;
+    const power = averagedSpectrum(wave, dt, size, n / size);
     let inside = 0;
     let above = 0;
-    for (let k = 1; k < n / 2; k++) {
-      const power = spectrum[2 * k] ** 2 + spectrum[2 * k + 1] ** 2;
-      if (k / (n * dt) <= 10e3) inside += power;
-      else if (k / (n * dt) > 10.1e3) above += power;
+    for (let k = 1; k < size / 2; k++) {
+      const f = k / (size * dt);
+      if (f <= 10e3) inside += power[k];
+      // Beyond the Hann window's main lobe (2 bins, 39 Hz) past the stopband edge.
+      else if (f > 12.5e3 + 40) above += power[k];
     }
+    // The kernel's stopband is about 60 dB down (Kaiser's design formula).
     expect(above / inside).toBeLessThan(1e-6);
+  });
+
+  it('has a continuous spectrum: every 25 Hz band below the bandwidth carries its share, within 25%', () => {
+    // A spectrum of lines (a sum of sinusoids) leaves narrow bands empty; a narrow filter would then see no noise at all.
+    const wave = good(text);
+    const dt = 1 / 40e3;
+    const size = 1 << 12; // bins of 9.77 Hz
+    const power = averagedSpectrum(wave, dt, size, 256);
+    const bins = Math.floor(10e3 * size * dt);
+    const bands: number[] = [];
+    for (let k = 1; k + 2 < bins; k += 3) bands.push(power[k] + power[k + 1] + power[k + 2]);
+    const mean = bands.reduce((a, b) => a + b, 0) / bands.length;
+    // 256 segments × 3 bins: each band's relative spread is about 1/√768 = 3.6% (chi-squared statistics).
+    for (const band of bands.slice(0, -3)) expect(Math.abs(band / mean - 1)).toBeLessThan(0.25);
   });
 
   it('has no corners and checks its keys', () => {

@@ -1,3 +1,5 @@
+import { gaussianSample } from '../waves/gaussian-samples.ts';
+
 /** Samples per 1/bandwidth: the interpolated noise is flat within 0.6 dB up to the bandwidth. */
 export const SAMPLES_PER_PERIOD = 10;
 /** ∫ sinc⁸: the variance of a cubic B-spline through unit-variance samples, averaged over time (151/315). */
@@ -49,25 +51,7 @@ export class NoiseSignal {
     return this.sigma * (w0 * this.sample(i - 1) + w1 * this.sample(i) + w2 * this.sample(i + 1) + w3 * this.sample(i + 2));
   }
 
-  /** Standard Gaussian sample `index` (Box–Muller on two hashed uniforms). */
   private sample(index: number): number {
-    const low = index | 0;
-    const high = Math.floor(index / 4294967296) | 0;
-    const a = mix(mix(mix(this.seed ^ 0x5bd1e995, this.stream), low), high);
-    const b = mix(a, 0x27d4eb2f);
-    const u1 = ((a >>> 0) + 0.5) / 4294967296;
-    const u2 = ((b >>> 0) + 0.5) / 4294967296;
-    return Math.sqrt(-2 * Math.log(u1)) * Math.cos(2 * Math.PI * u2);
+    return gaussianSample(this.seed, this.stream, index);
   }
-}
-
-/** One round of a 32-bit integer hash: fold in `value`, then MurmurHash3's finalizer (a published mixer). */
-function mix(state: number, value: number): number {
-  let h = Math.imul(state ^ value, 0x9e3779b1);
-  h ^= h >>> 16;
-  h = Math.imul(h, 0x85ebca6b);
-  h ^= h >>> 13;
-  h = Math.imul(h, 0xc2b2ae35);
-  h ^= h >>> 16;
-  return h;
 }
