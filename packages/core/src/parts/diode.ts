@@ -1,8 +1,9 @@
 import type { MapReader, ValueReader } from '../reading/reader.ts';
 import { quantities } from '../units/quantity.ts';
+import { BOLTZMANN } from '../units/constants.ts';
 import { stampAdmittance, stampConductance, stampCurrent } from './stamps.ts';
 import { across } from './solution.ts';
-import type { Binder, ComplexMna, Device, Link, Mna, StepInfo } from './device.ts';
+import type { Binder, ComplexMna, Device, Link, Mna, NoiseSource, StepInfo } from './device.ts';
 import type { Conditions, PartKind, PartSpecBase } from './part-kind.ts';
 import { nodeOf, readBetween } from './pins.ts';
 import { readPresetOrMap } from './preset.ts';
@@ -112,6 +113,13 @@ class DiodeDevice implements Device {
     this.stampStatic(m);
     const v = across(x, this.inner, this.cathode);
     stampAdmittance(m, this.inner, this.cathode, this.junction.slope(v), this.charge === null ? 0 : omega * this.charge.capacitance(v));
+  }
+
+  /** The junction's shot noise at the operating point, and the series resistance's thermal noise. */
+  noiseSources(x: Float64Array, kelvin: number): readonly NoiseSource[] {
+    const shot: NoiseSource = { source: 'shot', into: this.inner, from: this.cathode, white: this.junction.shotNoise(across(x, this.inner, this.cathode)), corner: 0 };
+    if (this.inner === this.anode) return [shot];
+    return [shot, { source: 'thermal', into: this.anode, from: this.inner, white: (4 * BOLTZMANN * kelvin) / this.spec.parameters.seriesResistance, corner: 0 }];
   }
 
   accept(x: Float64Array, step: StepInfo): void {

@@ -1,4 +1,4 @@
-import { kelvin, thermalVoltage } from '../units/constants.ts';
+import { ELEMENTARY_CHARGE, kelvin, thermalVoltage } from '../units/constants.ts';
 import type { DiodeParameters } from './diode-presets.ts';
 
 /** Reverse current at the breakdown voltage: `breakdown:` is the reverse voltage at this current. */
@@ -65,6 +65,18 @@ export class Junction {
     this.current = i + GMIN * u;
     this.conductance = g + GMIN;
     return u;
+  }
+
+  /**
+   * One-sided shot-noise density of the junction's current at voltage `v`, A²/Hz: the forward
+   * and reverse carrier flows, Is·exp(v/nVt) and Is, are independent, so 2q·(I + 2·Is), which
+   * is 4kT·g at zero bias for n = 1 (textbook shot noise); a breakdown current adds 2q·|I| as
+   * its least (avalanche multiplication makes more; this stays the floor).
+   */
+  shotNoise(v: number): number {
+    let flows = this.is * (exponential(v / this.nvt) + 1);
+    if (Number.isFinite(this.breakdown)) flows += BREAKDOWN_CURRENT * Math.abs(exponential(-(v + this.breakdown) / this.vt) - this.breakdownAtZero);
+    return 2 * ELEMENTARY_CHARGE * flows;
   }
 
   /** dI/dV at junction voltage `v`, without limiting: the small-signal conductance at an operating point. */
