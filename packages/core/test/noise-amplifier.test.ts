@@ -83,6 +83,14 @@ describe('noise of a non-inverting stage of gain 10 with finite gain-bandwidth',
     expect(adc.noiseFreeBits).toBe(Math.log2(10 / (6.6 * adc.rmsVolts)));
   });
 
+  it('never gives a converter more noise-free bits than it has', () => {
+    // The same stage read by an 8-bit converter: its noise is far below one LSB (39 mV).
+    const withAdc = noiseAnalysis(stage({ input: 'out', bits: 8, range: [-5, 5], rate: '200k' }), { from: F1, to: F2, hints: false });
+    const [adc] = withAdc.adc;
+    expect(Math.log2(10 / (6.6 * adc.rmsVolts))).toBeGreaterThan(9);
+    expect(adc.noiseFreeBits).toBe(8);
+  });
+
   it('takes the band to the converter\'s Nyquist rate when the section leaves it out', () => {
     const circuit = { ...stage({ input: 'out', bits: 12, range: [0, 3.3], rate: '20k' }), noise: {} };
     const analysis = noiseAnalysis(circuit, { hints: false });

@@ -79,7 +79,8 @@ function adcNoise(spec: AdcSpec, output: OutputNoiseFigures, frequency: Float64A
     lsb,
     lsbRms: rmsVolts / lsb,
     peakToPeakLsb: (PEAK_TO_PEAK_SIGMAS * rmsVolts) / lsb,
-    noiseFreeBits: Math.log2(fullScale / (PEAK_TO_PEAK_SIGMAS * rmsVolts)),
+    // A converter resolves no more than its own bits, however quiet its input (and a noiseless input stays finite).
+    noiseFreeBits: Math.min(spec.bits, Math.log2(fullScale / (PEAK_TO_PEAK_SIGMAS * rmsVolts))),
     averagingFor1Lsb,
     beyondBand: beyondBand(frequency, power, rmsVolts ** 2),
     converterLsbRms: spec.noise,

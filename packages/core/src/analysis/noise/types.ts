@@ -62,7 +62,7 @@ export interface AdcNoise {
   readonly lsbRms: number;
   /** 6.6 σ in LSB: the span 99.9% of samples of Gaussian noise fall in (common practice). */
   readonly peakToPeakLsb: number;
-  /** log2(full scale / peak-to-peak volts): the bits that do not flicker. */
+  /** log2(full scale / peak-to-peak volts), at most the converter's bits: the bits that do not flicker. */
   readonly noiseFreeBits: number;
   /**
    * Consecutive samples to average so that the mean stays within ±1 LSB (6.6 σ of the mean
