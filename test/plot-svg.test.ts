@@ -1,9 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import { buildCircuit, compare, envelope, runCircuit } from '@voltcast/core';
+import { buildCircuit, compare, envelope, noiseAnalysis, runCircuit } from '@voltcast/core';
 import { renderFigure } from '../packages/cli/src/plot/render-figure.ts';
 import { runFigure } from '../packages/cli/src/plot/run-plot.ts';
 import { envelopeFigure } from '../packages/cli/src/plot/envelope-plot.ts';
 import { compareFigure } from '../packages/cli/src/plot/compare-plot.ts';
+import { noiseFigure } from '../packages/cli/src/plot/noise-plot.ts';
 import { siLabel } from '../packages/cli/src/plot/si-format.ts';
 import { readCircuitFile } from '../packages/cli/src/read-circuit-file.ts';
 import { repoRoot } from './support/run-cli.ts';
@@ -132,6 +133,23 @@ describe('SVG plots', () => {
       expect(bottoms.length).toBeGreaterThan(0);
       expect(Math.max(...bottoms)).toBeLessThan(frameTop);
     }
+  });
+
+  it('start a noise density panel at zero, on the frame, with no room below it', () => {
+    // A density is never negative (a fact of the trade); the stacked plot's axis starts at 0 V/√Hz.
+    const noisy = buildCircuit({
+      circuit: 'invented-plot-noise',
+      parts: { VS: { voltage: 0, between: ['in', 'gnd'] }, R1: { resistor: '10k', between: ['in', 'out'] }, C1: { capacitor: '10n', between: ['out', 'gnd'] } },
+      simulate: { duration: '1m' },
+      record: ['out'],
+      noise: { from: 10, to: '100k' },
+    });
+    const svg = renderFigure(noiseFigure('invented-plot-noise', 'noise.yaml', noiseAnalysis(noisy, { hints: false }), ['out']));
+    expect(xmlProblems(svg)).toEqual([]);
+    // The 0 V/√Hz tick label sits on the frame's bottom edge (labels are drawn 4 px below their tick).
+    const frame = /<rect class="frame" x="[\d.]+" y="([\d.]+)" width="[\d.]+" height="([\d.]+)"/.exec(svg)!;
+    const zero = /<text x="[\d.]+" y="([\d.]+)"[^>]*>0 V\/√Hz</.exec(svg)!;
+    expect(Number(zero[1]) - 4).toBeCloseTo(Number(frame[1]) + Number(frame[2]), 6);
   });
 
   it('label axes with SI prefixes', () => {

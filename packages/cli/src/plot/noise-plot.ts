@@ -26,7 +26,7 @@ export function noiseFigure(circuitName: string, fileName: string, noise: NoiseA
       return { kind: 'band', name: layer.name, x: f, low, high: below.map(Math.sqrt) };
     });
     series.push({ kind: 'line', name: `${name} total (${formatSI(node.rms, 'V', 3)} rms)`, x: f, values: node.density });
-    return { title: `${name}: noise density`, unit: 'V/√Hz', series, colours: [...layers.map((_, i) => colour(i)), '#333333'] };
+    return { title: `${name}: noise density`, unit: 'V/√Hz', series, colours: [...layers.map((_, i) => colour(i)), '#333333'], floor: 0 };
   });
   return {
     axis: 'frequency',

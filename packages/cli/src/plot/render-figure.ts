@@ -45,7 +45,7 @@ function drawPanel(panel: Panel, key: LegendLayout, x: ScaleContinuousNumeric<nu
   const bottom = top + panelHeight;
   const [low, high] = valueSpan(panel.series);
   const pad = (high - low) * 0.06 || Math.abs(high) * 0.1 || 1;
-  const y = scaleLinear().domain([low - pad, high + pad]).range([bottom, top]).nice();
+  const y = scaleLinear().domain([panel.floor ?? low - pad, high + pad]).range([bottom, top]).nice();
   const [left, right] = x.range();
   const clipId = `clip-${top}`;
   const titleBaseline = top - 8 - (key.rows - 1) * legendRowHeight;

@@ -24,6 +24,8 @@ export interface Panel {
   readonly series: readonly Series[];
   /** Colour per series, by index in `series`; a band and its nominal line may share one. */
   readonly colours: readonly string[];
+  /** Where the y axis starts when the values cannot go below it (a density starts at 0); default: below the lowest value. */
+  readonly floor?: number;
 }
 
 export interface Figure {
