@@ -3,6 +3,7 @@ import { join } from 'node:path';
 import { formatSI, type Circuit, type CircuitRun, type Findings } from '@voltcast/core';
 import { findingsText } from './findings-text.ts';
 import { adcText } from './adc-text.ts';
+import { rowsText } from './rows-text.ts';
 import type { NodeExtremes } from './node-extremes.ts';
 import { textTable } from './text-table.ts';
 
@@ -64,7 +65,7 @@ export function reportText(report: RunReport): string {
     'settings',
     ...textTable([
       ['duration', formatSI(settings.duration, 's')],
-      ['output step', formatSI(settings.outputStep, 's')],
+      ['output step', rowsText(settings)],
       ['max step', formatSI(settings.maxStep, 's')],
       ...(settings.fixedStep !== undefined ? [['fixed step', formatSI(settings.fixedStep, 's')]] : []),
       ['accuracy, relative', String(settings.accuracy.relative)],

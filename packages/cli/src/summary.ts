@@ -1,3 +1,4 @@
+import { rowsText } from './rows-text.ts';
 import { isAbsolute, relative, resolve } from 'node:path';
 import { formatSI, type Circuit } from '@voltcast/core';
 import { nodeTable, type RunReport } from './report.ts';
@@ -11,6 +12,7 @@ export function runSummary(report: RunReport, circuit: Circuit, wallSeconds: num
     `${report.circuit} (${report.file})`,
     ...textTable([
       ['simulated', `${formatSI(circuit.simulate.duration, 's')} in ${formatSI(wallSeconds, 's', 3)} wall time`],
+      ['rows every', rowsText(circuit.simulate)],
       ['steps', `${stats.acceptedSteps} accepted, ${stats.rejectedSteps} rejected`],
       ['LU factorizations', String(stats.factorizations)],
     ], 2),

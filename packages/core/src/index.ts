@@ -14,7 +14,7 @@
 // Reading a circuit file or object.
 export { readCircuit, parseCircuit, buildCircuit } from './circuit/parse-circuit.ts';
 export type { ParseOptions, ReadCircuitResult } from './circuit/parse-circuit.ts';
-export type { Circuit, SimulateSettings, Accuracy } from './circuit/circuit.ts';
+export type { Circuit, SimulateSettings, Accuracy, RowsSetBy } from './circuit/circuit.ts';
 export type { AdcSpec, AdcCoding, AdcRounding, SampleTimes, SamplingSpec } from './circuit/adc-spec.ts';
 export { CircuitError, formatIssue } from './reading/issue.ts';
 export type { CircuitIssue, SourcePosition } from './reading/issue.ts';

@@ -18,7 +18,7 @@ describe('the public surface of @voltcast/core', () => {
     expect(exportedNames()).toEqual(
       [
         // reading a circuit
-        'readCircuit', 'parseCircuit', 'buildCircuit', 'ParseOptions', 'ReadCircuitResult', 'Circuit', 'SimulateSettings', 'Accuracy',
+        'readCircuit', 'parseCircuit', 'buildCircuit', 'ParseOptions', 'ReadCircuitResult', 'Circuit', 'SimulateSettings', 'Accuracy', 'RowsSetBy',
         'AdcSpec', 'AdcCoding', 'AdcRounding', 'SampleTimes', 'SamplingSpec', 'CircuitError', 'formatIssue', 'CircuitIssue', 'SourcePosition',
         // numbers
         'parseQuantity', 'formatSI', 'ParsedQuantity', 'quantities', 'Quantity',

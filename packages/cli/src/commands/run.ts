@@ -5,7 +5,7 @@ import { readCircuitFile } from '../read-circuit-file.ts';
 import { InputError } from '../exit-codes.ts';
 import { writeOutputDir } from '../output/output-dir.ts';
 import { WaveformCsv } from '../waveform-csv.ts';
-import { ExtremesTracker } from '../node-extremes.ts';
+import { nodeExtremes } from '../node-extremes.ts';
 import { buildReport, writeReport } from '../report.ts';
 import { RunProgress } from '../progress.ts';
 import { runSummary } from '../summary.ts';
@@ -40,14 +40,14 @@ export async function runCommand(file: string, options: RunOptions): Promise<voi
 
   const { report, files } = await writeOutputDir(outDir, { force: options.force }, (staging) => {
     const csv = new WaveformCsv(join(staging, 'waveforms.csv'), circuit.recorded);
-    const extremes = new ExtremesTracker(circuit.recorded);
+    const lastRow = new Float64Array(circuit.recorded.length);
     let run: CircuitRun;
     try {
       run = runCircuit(circuit, {
         keepColumns: options.plot === true,
         onRow: (time, values) => {
           csv.row(time, values);
-          extremes.add(values);
+          lastRow.set(values);
         },
         onProgress: (fraction) => progress.update(fraction),
         ...(noise !== undefined ? { noise } : {}),
@@ -56,7 +56,7 @@ export async function runCommand(file: string, options: RunOptions): Promise<voi
       progress.stop();
       csv.close();
     }
-    const built = buildReport(fileName, run, extremes.results());
+    const built = buildReport(fileName, run, nodeExtremes(run.transient, lastRow));
     const report = noise !== undefined ? { ...built, noise } : built;
     const adcFiles = writeAdcFiles(staging, circuit.name, run.adcs, codeFormats);
     const names = ['waveforms.csv', ...adcFiles, ...writeReport(staging, report).map((path) => basename(path))];

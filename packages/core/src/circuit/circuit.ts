@@ -15,6 +15,22 @@ export interface SimulateSettings {
   readonly accuracy: Accuracy;
   /** Temperature of every part, °C (diode junctions, noise). */
   readonly temperature: number;
+  /**
+   * Present when `output-step` was not written and a part's drive changes faster than
+   * duration / 1000 allows rows to show: that part and its timescale set the rows
+   * (`simulateDefaults.rowsPerTimescale` rows in it), unless the row count reached
+   * `simulateDefaults.mostDefaultRows` (`capped`).
+   */
+  readonly rowsSetBy?: RowsSetBy;
+}
+
+/** The part whose drive set the default output rows. */
+export interface RowsSetBy {
+  readonly part: string;
+  /** Its shortest feature, seconds: a period, a level's hold, a segment of points. */
+  readonly timescale: number;
+  /** True when rows would have been finer than the row cap allows: they do not resolve it. */
+  readonly capped: boolean;
 }
 
 /** `simulate: accuracy:`: the tolerances of the local truncation error per step. */
@@ -74,6 +90,10 @@ export interface Circuit {
 export const simulateDefaults = {
   /** Output rows when `output-step` is absent: duration / 1000. */
   rowsWhenUnset: 1000,
+  /** Rows in the shortest timescale of the parts' drives, when `output-step` is absent. */
+  rowsPerTimescale: 20,
+  /** At most this many rows are chosen by default. */
+  mostDefaultRows: 100_000,
   accuracy: { relative: 1e-4, volts: 1e-6, amps: 1e-9 },
   /** °C: the temperature data sheets state typical figures at. */
   temperature: 25,

@@ -1,5 +1,5 @@
 import type { Accuracy, Circuit, SimulateSettings } from './circuit.ts';
-import { simulateDefaults } from './circuit.ts';
+import { simulateDefaults, type RowsSetBy } from './circuit.ts';
 import { CircuitError, type CircuitIssue } from '../reading/issue.ts';
 import type { MapReader, ReadContext, ValueReader } from '../reading/reader.ts';
 import { IssueSink, YamlValue } from '../reading/yaml-reader.ts';
@@ -82,7 +82,7 @@ function readDocument(tree: YamlNode, sink: IssueSink, context: ReadContext, sta
   const top = root.map();
   const name = readName(top);
   const parts = readParts(top.need('parts', 'list the parts under parts:, e.g. R1: { resistor: 10k, between: [in, out] }'), context);
-  const simulate = readSimulate(top.need('simulate', 'write simulate: { duration: 10m }'));
+  const simulate = readSimulate(top.need('simulate', 'write simulate: { duration: 10m }'), fastestPart(parts.specs));
   const recordValue = top.get('record');
   const adcValue = top.get('adc');
   const response = readResponseSection(top.get('response'), parts.specs);
@@ -143,14 +143,32 @@ function readPart(name: string, value: ValueReader, context: ReadContext): PartS
   return tolerances === undefined ? spec : { ...spec, tolerances };
 }
 
-function readSimulate(value: ValueReader | undefined): SimulateSettings {
+/** The part whose drive changes shape fastest, and its timescale. */
+function fastestPart(specs: readonly PartSpecBase[]): { part: string; timescale: number } | undefined {
+  let fastest: { part: string; timescale: number } | undefined;
+  for (const spec of specs) {
+    const timescale = partKinds.find((k) => k.key === spec.kind)?.timescale?.(spec) ?? Infinity;
+    if (timescale > 0 && timescale < (fastest?.timescale ?? Infinity)) fastest = { part: spec.name, timescale };
+  }
+  return fastest;
+}
+
+function readSimulate(value: ValueReader | undefined, fastest: { part: string; timescale: number } | undefined): SimulateSettings {
   const keys = value?.map();
   const time = quantities.time;
   const positive = { above: 0 };
   const duration = keys?.need('duration', 'write duration: 10m, the end time of the run')?.number(time, positive) ?? NaN;
-  const outputStep = keys?.numberOr('output-step', time, duration / simulateDefaults.rowsWhenUnset, positive) ?? NaN;
-  if (outputStep > duration) keys?.get('output-step')?.fail(`output-step ${formatSI(outputStep, 's')} is longer than the duration ${formatSI(duration, 's')}`, 'make it at most the duration; the default is duration / 1000');
-  else if (duration / outputStep > manyRows) keys?.get('output-step')?.warn(`output-step ${formatSI(outputStep, 's')} makes ${formatSI(duration / outputStep, '')} rows`, 'check the prefix: m is milli, u is micro, n is nano');
+  const written = keys?.get('output-step');
+  const rows = written === undefined ? defaultRows(duration, fastest) : undefined;
+  const outputStep = written?.number(time, positive) ?? rows?.outputStep ?? NaN;
+  if (outputStep > duration) written?.fail(`output-step ${formatSI(outputStep, 's')} is longer than the duration ${formatSI(duration, 's')}`, 'make it at most the duration, or leave it out: voltcast then chooses rows that show the fastest stimulus');
+  else if (duration / outputStep > manyRows) written?.warn(`output-step ${formatSI(outputStep, 's')} makes ${formatSI(duration / outputStep, '')} rows`, 'check the prefix: m is milli, u is micro, n is nano');
+  else if (fastest !== undefined && fastest.timescale < duration && outputStep > fastest.timescale / 2) {
+    written?.warn(
+      `output-step ${formatSI(outputStep, 's')} is longer than half of ${fastest.part}'s ${formatSI(fastest.timescale, 's')} (its shortest period, level or segment): the rows, the CSV and the plot cannot show it (minimum and maximum still come from every step)`,
+      `write output-step: ${formatSI(fastest.timescale / simulateDefaults.rowsPerTimescale, 's')} or less, or leave it out for rows chosen to show it`,
+    );
+  }
   const fixedValue = keys?.get('fixed-step');
   const fixedStep = fixedValue?.number(time, positive);
   if (fixedStep !== undefined && fixedStep > duration) fixedValue?.fail(`fixed-step ${formatSI(fixedStep, 's')} is longer than the duration ${formatSI(duration, 's')}`);
@@ -162,9 +180,23 @@ function readSimulate(value: ValueReader | undefined): SimulateSettings {
     accuracy: readAccuracy(keys?.get('accuracy')),
     // Above absolute zero; beyond the range parts are rated for the models mean little, but that is the user's call.
     temperature: keys?.numberOr('temperature', quantities.temperature, simulateDefaults.temperature, { above: -ZERO_CELSIUS }) ?? NaN,
+    ...(rows?.setBy !== undefined ? { rowsSetBy: rows.setBy } : {}),
   };
   keys?.finish();
   return settings;
+}
+
+/**
+ * Rows when `output-step` is absent: duration / 1000, or finer so that the fastest part's
+ * timescale holds `rowsPerTimescale` rows, up to `mostDefaultRows` rows.
+ */
+function defaultRows(duration: number, fastest: { part: string; timescale: number } | undefined): { outputStep: number; setBy?: RowsSetBy } {
+  const plain = duration / simulateDefaults.rowsWhenUnset;
+  if (fastest === undefined) return { outputStep: plain };
+  const wanted = fastest.timescale / simulateDefaults.rowsPerTimescale;
+  if (!(wanted < plain)) return { outputStep: plain };
+  const finest = duration / simulateDefaults.mostDefaultRows;
+  return { outputStep: Math.max(wanted, finest), setBy: { ...fastest, capped: wanted < finest } };
 }
 
 /** `accuracy: { relative, volts, amps }`: each key optional, defaults in `simulateDefaults`. */

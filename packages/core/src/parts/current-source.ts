@@ -24,6 +24,7 @@ export const currentSource: PartKind<CurrentSourceSpec> = {
     pins: readBetween(options),
   }),
   create: (spec) => new CurrentSourceDevice(spec),
+  timescale: (spec) => spec.wave.timescale(),
   tolerable: [sourceTolerance<CurrentSourceSpec>('current', quantities.current)],
 };
 

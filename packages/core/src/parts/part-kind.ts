@@ -42,4 +42,9 @@ export interface PartKind<Spec extends PartSpecBase = PartSpecBase> {
    * Absent: the kind has no tolerance. The first entry is the main value when its key is `key`.
    */
   readonly tolerable?: readonly TolerableValue<Spec>[];
+  /**
+   * The shortest time over which the part's own drive changes shape (a source's wave, a
+   * switch's schedule), for choosing default output rows; absent or Infinity when it has none.
+   */
+  timescale?(spec: Spec): number;
 }

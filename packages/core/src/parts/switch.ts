@@ -48,7 +48,15 @@ export const timedSwitch: PartKind<SwitchSpec> = {
     return { kind: 'switch', name, onResistance, offResistance, schedule: readSchedule(options), pins: readBetween(options) };
   },
   create: (spec) => new SwitchDevice(spec),
+  timescale: (spec) => shortestInterval(spec.schedule),
 };
+
+/** The shortest time the switch stays in one state. */
+function shortestInterval({ edges, period }: SwitchSchedule): number {
+  let shortest = period < Infinity && edges.length > 0 ? period - edges[edges.length - 1] + edges[0] : Infinity;
+  for (let i = 1; i < edges.length; i++) shortest = Math.min(shortest, edges[i] - edges[i - 1]);
+  return shortest;
+}
 
 function readResistances(main: ValueReader): { onResistance: number; offResistance: number } {
   const positive = { above: 0 };

@@ -24,6 +24,7 @@ export const voltageSource: PartKind<VoltageSourceSpec> = {
     pins: readBetween(options),
   }),
   create: (spec) => new VoltageSourceDevice(spec),
+  timescale: (spec) => spec.wave.timescale(),
   tolerable: [sourceTolerance<VoltageSourceSpec>('voltage', quantities.voltage)],
 };
 

@@ -30,6 +30,13 @@ export interface TransientResult {
   /** Column per recorded node, same length as `time`. */
   readonly columns: ReadonlyMap<string, Float64Array>;
   readonly recorded: readonly string[];
+  /**
+   * Per recorded node (in `recorded` order), its smallest and largest value over every step
+   * the simulation accepted, so a peak between rows still counts. Where exact steps carry a
+   * linear stretch the steps are the rows (and corners, and ADC instants).
+   */
+  readonly minimum: Float64Array;
+  readonly maximum: Float64Array;
   readonly stats: RunStats;
   /** The DC operating point: voltage of every named node at t = 0. */
   readonly operatingPoint: ReadonlyMap<string, number>;

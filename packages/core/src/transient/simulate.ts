@@ -11,6 +11,7 @@ import type { SimulateOptions, TransientResult } from './result.ts';
 import { SimulationError } from './simulation-error.ts';
 import { TruncationError } from './truncation-error.ts';
 import { LinearStretch } from './linear-stretch.ts';
+import { Extremes } from './extremes.ts';
 import { formatSI } from '../units/format.ts';
 import { noiseBandOf } from '../circuit/noise-band.ts';
 import { noiseMaxStep } from './noise-injection.ts';
@@ -79,6 +80,8 @@ export function simulate(circuit: Circuit, options: SimulateOptions = {}): Trans
   const grid = new OutputGrid(settings.outputStep, duration);
   const output = new OutputRecorder(grid, Int32Array.from(circuit.recorded, (p) => topology.node(p)), options.keepColumns !== false, options.onRow);
   output.record(0, x);
+  const extremes = new Extremes(Int32Array.from(circuit.recorded, (p) => topology.node(p)));
+  extremes.add(x);
   const landings = new Landings(grid, output, observers, eps, duration, options.onProgress);
 
   let t = 0;
@@ -129,6 +132,7 @@ export function simulate(circuit: Circuit, options: SimulateOptions = {}): Trans
           exactRun = 0;
           exact = stretch!.begin(t, x, Math.min(corner, duration), step);
         }
+        extremes.add(x);
         landings.passed(t, x);
       } else {
         exact = false;
@@ -232,12 +236,13 @@ export function simulate(circuit: Circuit, options: SimulateOptions = {}): Trans
         retryIn = retryWait;
       }
     }
+    extremes.add(x);
     landings.passed(t, x);
   }
   stats.propagators = stretch?.builds ?? 0;
 
   const columns = new Map(circuit.recorded.map((p, i) => [p, output.columns[i]] as const));
-  return { time: output.time, columns, recorded: circuit.recorded, stats, operatingPoint };
+  return { time: output.time, columns, recorded: circuit.recorded, minimum: extremes.minimum, maximum: extremes.maximum, stats, operatingPoint };
 }
 
 function stuck(t: number, nodes: string[], why: string): SimulationError {

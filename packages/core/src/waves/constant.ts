@@ -9,4 +9,7 @@ export class ConstantWave implements Wave {
   nextCorner(): number {
     return Infinity;
   }
+  timescale(): number {
+    return Infinity;
+  }
 }

@@ -37,6 +37,11 @@ export class FmWave implements Wave {
   nextCorner(): number {
     return Infinity;
   }
+
+  /** The period at the highest instantaneous frequency. */
+  timescale(): number {
+    return (2 * Math.PI) / (this.carrierOmega + this.index * this.rateOmega);
+  }
 }
 
 /** `fm: { carrier: 10k, deviation: 2k, rate: 200, amplitude: 1, offset: 0, phase: 0 }`. */

@@ -55,6 +55,10 @@ export class NoiseWave implements Wave {
   nextCorner(): number {
     return Infinity;
   }
+
+  timescale(): number {
+    return 1 / this.bandwidth;
+  }
 }
 
 interface Kernel {

@@ -41,6 +41,26 @@ export class PiecewiseLinearWave implements Wave {
     return v0 + ((this.values[lo + 1] - v0) * (u - times[lo])) / (times[lo + 1] - times[lo]);
   }
 
+  /**
+   * The narrowest peak or valley: for each turn of direction, from the start of the segment
+   * that leads into it to the end of the one that leads out (a level between counts in). A
+   * single edge has none: steps land on its corners, and rows on either side show it.
+   */
+  timescale(): number {
+    const { times, values } = this;
+    let narrowest = Infinity;
+    let previous = -1;
+    let direction = 0;
+    for (let i = 0; i + 1 < times.length; i++) {
+      const d = Math.sign(values[i + 1] - values[i]);
+      if (d === 0) continue;
+      if (d === -direction) narrowest = Math.min(narrowest, times[i + 1] - times[previous]);
+      previous = i;
+      direction = d;
+    }
+    return narrowest;
+  }
+
   nextCorner(t: number): number {
     if (this.period < Infinity) return nextPeriodicCorner(t, 0, this.period, this.periodCorners);
     const times = this.times;

@@ -28,6 +28,10 @@ export class SineWave implements Wave {
   nextCorner(t: number): number {
     return this.delay > 0 && t < this.delay ? this.delay : Infinity;
   }
+
+  timescale(): number {
+    return 1 / this.frequency;
+  }
 }
 
 /** `sine: { amplitude: 1, frequency: 1k, offset: 2.5, phase: 90, delay: 1m }`. */

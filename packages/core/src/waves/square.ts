@@ -38,6 +38,11 @@ export class SquareWave implements Wave {
   nextCorner(t: number): number {
     return nextPeriodicCorner(t, this.delay, this.period, this.corners);
   }
+
+  /** The shorter level: the edges are corners, which steps land on whatever the rows. */
+  timescale(): number {
+    return Math.min(this.fallStart, this.period - this.fallStart);
+  }
 }
 
 /** `square: { low: 0, high: 5, frequency: 1k, duty: 25%, edge: 1u, delay: 0 }`. */

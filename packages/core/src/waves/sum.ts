@@ -12,6 +12,10 @@ export class SumWave implements Wave {
     return total;
   }
 
+  timescale(): number {
+    return Math.min(...this.members.map((m) => m.timescale()));
+  }
+
   nextCorner(t: number): number {
     let corner = Infinity;
     for (let i = 0; i < this.members.length; i++) {

@@ -31,6 +31,10 @@ export class TriangleWave implements Wave {
   nextCorner(t: number): number {
     return nextPeriodicCorner(t, this.delay, this.period, this.corners);
   }
+
+  timescale(): number {
+    return this.half;
+  }
 }
 
 /** `triangle: { low: -1, high: 1, frequency: 500, delay: 2m }`. */

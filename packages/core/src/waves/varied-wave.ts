@@ -8,5 +8,6 @@ export function variedWave(wave: Wave, change: (value: number) => number): Wave 
   return {
     value: (t) => change(wave.value(t)),
     nextCorner: (t) => wave.nextCorner(t),
+    timescale: () => wave.timescale(),
   };
 }

@@ -13,6 +13,12 @@ export interface Wave {
    * on and damp after. `Infinity` when there is none.
    */
   nextCorner(t: number): number;
+  /**
+   * The shortest time over which the wave changes shape: its period when smooth, the
+   * shortest spacing of its corners when piecewise; Infinity for a constant. Default output
+   * rows are chosen to resolve it.
+   */
+  timescale(): number;
 }
 
 /**
