@@ -52,6 +52,9 @@ describe('voltcast run with an adc section', () => {
     expect(header).toContain('static const uint16_t adc_mcu_codes[ADC_MCU_CODE_COUNT] = {');
     const json = JSON.parse(readFileSync(join(out, 'adc-MCU.json'), 'utf8'));
     expect(json.code).toEqual(codes);
+    // Sample times read the same in both files, as the decimals start + k/rate are (before: the JSON had 0.0017500000000000003 where the CSV had 0.00175).
+    expect(lines.slice(1).map((line) => line.split(',')[1])).toEqual(json.time.map(String));
+    expect(lines[4].split(',')[1]).toBe('0.00175');
     expect(json.bits).toBe(12);
 
     // Compile the header with the system C compiler and print the array back: C is the

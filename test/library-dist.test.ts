@@ -39,6 +39,6 @@ console.log(JSON.stringify({ out: Array.from(run.transient.columns.get('out')), 
     const fromSource = runCircuit(parseCircuit(circuitText));
     expect(fromDist.out).toEqual(Array.from(fromSource.transient.columns.get('out')!));
     expect(fromDist.codes).toEqual(Array.from(fromSource.adcs[0].code));
-    expect(fromDist.codes.length).toBe(11); // instants 0, 0.2 ms, ..., 2 ms
+    expect(fromDist.codes.length).toBe(10); // instants 0, 0.2 ms, ..., 1.8 ms: a rate converts on [start, duration)
   });
 });

@@ -50,7 +50,7 @@ function writeCsv(path: string, { index, time, volts, code }: AdcReadout): void 
   const out = new BufferedWriter(path);
   try {
     out.write('index,time,volts,code\n');
-    for (let i = 0; i < code.length; i++) out.write(`${index[i]},${formatValue(time[i])},${formatValue(volts[i])},${code[i]}\n`);
+    for (let i = 0; i < code.length; i++) out.write(`${index[i]},${time[i]},${formatValue(volts[i])},${code[i]}\n`);
   } finally {
     out.close();
   }

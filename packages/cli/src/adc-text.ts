@@ -13,13 +13,19 @@ export function adcText(adcs: readonly AdcReport[]): string[] {
     a.codeRange ? `${a.codeRange[0]}..${a.codeRange[1]}` : '-',
     `${a.clippedLow.count} / ${a.clippedHigh.count}`,
     codeError(a.largestError),
-    codeError(a.largestErrorBeforeWindow),
+    a.largestErrorBeforeWindow === undefined ? '-' : a.largestHeldError > a.lsb / 2 ? codeError(a.largestErrorBeforeWindow) : 'settled',
     a.largestHeldError > 0 ? `${formatSI(a.largestHeldError, 'V')} (${(a.largestHeldError / a.lsb).toFixed(1)} LSB)` : '-',
   ]);
   return [
     '',
     'converters (codes read against an error-free converter on the true input)',
-    ...textTable([['adc', 'codes', 'range', 'clipped low/high', 'largest error', 'vs input before window', 'held - input'], ...rows]),
+    ...textTable([['adc', 'codes', 'range', 'clipped low/high', 'largest error', 'vs input as the window opened', 'held - input'], ...rows]),
+    ...(adcs.some((a) => a.largestErrorBeforeWindow !== undefined)
+      ? [
+          '  vs input as the window opened: the code against the input just before the sampling capacitor connected; shown where the held',
+          '  voltage missed the input by more than 1/2 LSB (an acquisition error), "settled" elsewhere (a moving input adds its own motion).',
+        ]
+      : []),
   ];
 }
 

@@ -22,9 +22,12 @@ export class WaveformCsv {
     return this.#out.path;
   }
 
-  /** One output row; `values` are in record order (the array may be reused by the caller). */
+  /**
+   * One output row; `values` are in record order (the array may be reused by the caller).
+   * The time is written in full (it reads as its decimal already), values to 9 digits.
+   */
   row(time: number, values: Float64Array): void {
-    let line = formatValue(time);
+    let line = String(time);
     for (let i = 0; i < values.length; i++) line += ',' + formatValue(values[i]);
     this.#out.write(line + '\n');
   }

@@ -11,7 +11,7 @@ parts:
   RL: { resistor: 10k, between: [in, gnd] }
 simulate: { duration: 4m, output-step: 1m }
 adc:
-  A: { input: in, bits: 12, range: [0, 3.3], rate: 1M, start: 1u, ${adc} }
+  A: { input: in, bits: 12, range: [0, 3.3], rate: 1M, ${adc} }
 `);
   return runCircuit(circuit).adcs[0].code;
 }

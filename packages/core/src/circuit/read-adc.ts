@@ -138,7 +138,7 @@ function readTimes(m: MapReader, duration: number): SampleTimes {
     return { times };
   }
   if (rateValue === undefined) m.fail('an ADC needs `rate:` or `times:`', 'write e.g. `rate: 20k` (samples per second)');
-  const rate = rateValue?.number(quantities.frequency, { above: 0 }) ?? NaN;
+  const rate = rateValue?.number(quantities.sampleRate, { above: 0 }) ?? NaN;
   const start = m.numberOr('start', quantities.time, 0, { min: 0 });
   if (start > duration) startValue?.fail(`start ${formatSI(start, 's')} is after the end of the run (${formatSI(duration, 's')})`, 'make it at most the duration under simulate');
   else if ((duration - start) * rate > manySamples) rateValue?.warn(`rate ${formatSI(rate, 'Hz')} makes ${formatSI((duration - start) * rate, '')} samples`, 'check the prefix: k is kilo, M is mega, m is milli');

@@ -1,5 +1,7 @@
+import { decimalRounded } from '../units/decimal.ts';
+
 /**
- * Output row times: exactly k·outputStep for k = 0..N-1, and the duration itself as the
+ * Output row times: k·outputStep (to the decimal it reads as) for k = 0..N-1, and the duration itself as the
  * last row. Computed from k, never accumulated, so that row times carry no drift.
  */
 export class OutputGrid {
@@ -11,6 +13,6 @@ export class OutputGrid {
     this.rows = Math.max(1, Math.ceil(duration / step - 1e-9)) + 1;
   }
   time(row: number): number {
-    return row >= this.rows - 1 ? this.duration : row * this.step;
+    return row >= this.rows - 1 ? this.duration : decimalRounded(row * this.step);
   }
 }

@@ -22,6 +22,8 @@ export const quantities = {
   voltage: { name: 'voltage', units: ['V'] },
   current: { name: 'current', units: ['A'] },
   frequency: { name: 'frequency', units: ['Hz'] },
+  /** Samples per second as data sheets write them: `10kS/s`, `10ksps`, `1MSPS`, or hertz. */
+  sampleRate: { name: 'sample rate', units: ['S/s', 'sps', 'SPS', 'Hz'] },
   time: { name: 'time', units: ['s'] },
   slewRate: { name: 'slew rate', units: ['V/s'], perTime: true },
   gain: { name: 'gain', units: ['V/V'], decibels: true },
