@@ -16,18 +16,22 @@ test("the README's library snippet runs, reading the file wave beside the circui
   expect(snippet).toContain("from '@voltcast/core'");
   const core = pathToFileURL(join(repoRoot, 'packages/core/src/index.ts')).href;
   const program = `${snippet.replace("'@voltcast/core'", `'${core}'`)}
-console.log(JSON.stringify({ rows: run.transient.time.length, column: run.transient.columns.get('sensor')?.length, accepted: run.transient.stats.acceptedSteps }));
+const sensor = run.transient.columns.get('sensor');
+console.log(JSON.stringify({ rows: run.transient.time.length, column: sensor?.length, accepted: run.transient.stats.acceptedSteps, at: run.transient.valueAt('sensor', 12.34e-6), around: [sensor[123], sensor[124]], highest: run.transient.maximum[1], rowHighest: Math.max(...sensor) }));
 `;
   const scratch = mkdtempSync(join(tmpdir(), 'voltcast-readme-'));
   try {
     writeFileSync(join(scratch, 'snippet.ts'), program);
     const tsx = pathToFileURL(createRequire(import.meta.url).resolve('tsx')).href;
     const printed = execFileSync(process.execPath, ['--import', tsx, join(scratch, 'snippet.ts')], { cwd: repoRoot, encoding: 'utf8' });
-    const { rows, column, accepted } = JSON.parse(printed);
+    const { rows, column, accepted, at, around, highest, rowHighest } = JSON.parse(printed);
     // fixtures/sensor-cable-rl.yaml: 100 µs in 100 ns rows, so 1001 rows with both ends.
     expect(rows).toBe(1001);
     expect(column).toBe(rows);
     expect(accepted).toBeGreaterThanOrEqual(rows - 1);
+    // 12.34 µs lies 40% of the way from row 123 (12.3 µs) to row 124 (12.4 µs): linear interpolation.
+    expect(at).toBeCloseTo(around[0] + 0.4 * (around[1] - around[0]), 12);
+    expect(highest).toBeGreaterThanOrEqual(rowHighest);
   } finally {
     rmSync(scratch, { recursive: true, force: true });
   }

@@ -73,3 +73,26 @@ describe('default output rows resolve the fastest stimulus', () => {
     expect(edge.simulate.outputStep).toBeCloseTo(1e-3, 15);
   });
 });
+
+describe('valueAt on a run', () => {
+  const rc = buildCircuit({
+    circuit: 'invented-rc-step',
+    parts: { VS: { voltage: 1, between: ['in', 'gnd'] }, R1: { resistor: '1k', between: ['in', 'out'] }, C1: { capacitor: '1u', between: ['out', 'gnd'], initial: 0 } },
+    simulate: { duration: '5m', 'output-step': '100u' },
+    record: ['out'],
+  });
+  const run = simulate(rc);
+
+  it('reads a row exactly and interpolates between rows', () => {
+    expect(run.valueAt('out', 0.0013)).toBe(run.columns.get('out')![13]);
+    // RC charging 1 − exp(−t/RC) (textbook): between rows, within the chord's sag of about (Δt/τ)²/8 of the swing.
+    expect(run.valueAt('out', 0.00135)).toBeCloseTo(1 - Math.exp(-1.35), 3);
+    expect(run.valueAt('out', 0.005)).toBe(run.columns.get('out')!.at(-1));
+  });
+
+  it('says which nodes there are, and the run\'s span, when asked outside them', () => {
+    expect(() => run.valueAt('in', 1e-3)).toThrow("valueAt('in'): no recorded node of that name; the recorded nodes are out");
+    expect(() => run.valueAt('out', 6e-3)).toThrow(/outside the run, 0 s to 5 ms/);
+    expect(() => simulate(rc, { keepColumns: false }).valueAt('out', 1e-3)).toThrow(/kept no rows/);
+  });
+});

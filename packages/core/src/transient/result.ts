@@ -37,6 +37,11 @@ export interface TransientResult {
    */
   readonly minimum: Float64Array;
   readonly maximum: Float64Array;
+  /**
+   * Node `name`'s value at time `t`, interpolated linearly between rows (exact at a row).
+   * Throws a RangeError for a node not recorded or kept, or a time outside the run.
+   */
+  valueAt(name: string, t: number): number;
   readonly stats: RunStats;
   /** The DC operating point: voltage of every named node at t = 0. */
   readonly operatingPoint: ReadonlyMap<string, number>;

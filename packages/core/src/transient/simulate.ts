@@ -12,6 +12,7 @@ import { SimulationError } from './simulation-error.ts';
 import { TruncationError } from './truncation-error.ts';
 import { LinearStretch } from './linear-stretch.ts';
 import { Extremes } from './extremes.ts';
+import { interpolatedValue } from './value-at.ts';
 import { formatSI } from '../units/format.ts';
 import { noiseBandOf } from '../circuit/noise-band.ts';
 import { noiseMaxStep } from './noise-injection.ts';
@@ -242,7 +243,8 @@ export function simulate(circuit: Circuit, options: SimulateOptions = {}): Trans
   stats.propagators = stretch?.builds ?? 0;
 
   const columns = new Map(circuit.recorded.map((p, i) => [p, output.columns[i]] as const));
-  return { time: output.time, columns, recorded: circuit.recorded, minimum: extremes.minimum, maximum: extremes.maximum, stats, operatingPoint };
+  const time = output.time;
+  return { time, columns, recorded: circuit.recorded, minimum: extremes.minimum, maximum: extremes.maximum, valueAt: (name, at) => interpolatedValue(time, columns, name, at), stats, operatingPoint };
 }
 
 function stuck(t: number, nodes: string[], why: string): SimulationError {
