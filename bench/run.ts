@@ -9,6 +9,7 @@ import { fileURLToPath } from 'node:url';
 import { differentiatorIntoRails, linearNetwork, rcLadder } from './cases.ts';
 import { bareSolveLoop } from './bare-loop.ts';
 import { accuracyBench } from './accuracy.ts';
+import { commandLineBench } from './command-line.ts';
 // An internal constant, printed beside the measurements that chose it.
 import { SPARSE_FROM } from '../packages/core/src/transient/equations.ts';
 
@@ -196,6 +197,10 @@ const sections: { title: string; run(): void }[] = [
       console.log(`  200,000 rows, warm, processor time, best of 3: ${warm.bareCpuSeconds!.toFixed(2)} s simulating alone, ${warm.runCpuSeconds.toFixed(2)} s with every analysis`);
       target('analyses\' share of the run time, watching at every step included', `${(100 * share).toFixed(1)}%`, '≤ 10%', share <= 0.1);
     },
+  },
+  {
+    title: 'command line: start-up of the built command, and envelope workers',
+    run: () => commandLineBench(target),
   },
   {
     title: 'accuracy: error against references and CPU time, with odex as the peer',

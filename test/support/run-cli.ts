@@ -1,11 +1,10 @@
 import { spawn } from 'node:child_process';
-import { createRequire } from 'node:module';
-import { fileURLToPath, pathToFileURL } from 'node:url';
+import { fileURLToPath } from 'node:url';
 
 export const repoRoot = fileURLToPath(new URL('../..', import.meta.url));
 
-/** tsx's loader by absolute URL, so the CLI can be started from any working folder. */
-const tsxLoader = pathToFileURL(createRequire(import.meta.url).resolve('tsx')).href;
+/** The built command as a user starts it (plain node; test/support/build-cli.ts builds it before the tests). */
+const bin = `${repoRoot}packages/cli/bin/voltcast.mjs`;
 
 export interface CliOutcome {
   readonly code: number | null;
@@ -16,7 +15,7 @@ export interface CliOutcome {
 /** Run the voltcast CLI as a user would (a separate Node process, from the repo root). */
 export function runCli(args: readonly string[], cwd = repoRoot): Promise<CliOutcome> {
   return new Promise((resolve, reject) => {
-    const child = spawn(process.execPath, ['--import', tsxLoader, `${repoRoot}packages/cli/src/main.ts`, ...args], {
+    const child = spawn(process.execPath, [bin, ...args], {
       cwd,
       stdio: ['ignore', 'pipe', 'pipe'],
     });
@@ -35,7 +34,7 @@ export function runCli(args: readonly string[], cwd = repoRoot): Promise<CliOutc
  */
 export function runCliUntil(args: readonly string[], until: RegExp, cwd = repoRoot): Promise<string> {
   return new Promise((resolve, reject) => {
-    const child = spawn(process.execPath, ['--import', tsxLoader, `${repoRoot}packages/cli/src/main.ts`, ...args], { cwd, stdio: ['ignore', 'ignore', 'pipe'] });
+    const child = spawn(process.execPath, [bin, ...args], { cwd, stdio: ['ignore', 'ignore', 'pipe'] });
     let stderr = '';
     child.stderr.setEncoding('utf8').on('data', (chunk: string) => {
       stderr += chunk;

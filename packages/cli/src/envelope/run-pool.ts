@@ -1,5 +1,3 @@
-import { createRequire } from 'node:module';
-import { pathToFileURL } from 'node:url';
 import { Piscina } from 'piscina';
 import { mergeBounds, SimulationError, type EnvelopeBounds, type EnvelopePlan } from '@voltcast/core';
 import type { EnvelopeTask, TaskResult } from './task.ts';
@@ -8,16 +6,14 @@ import type { EnvelopeTask, TaskResult } from './task.ts';
 const slicesPerWorker = 8;
 
 /**
- * Run every variant of `plan` on `workers` threads and fold them. Workers are TypeScript run
- * through tsx's loader, found by absolute path so that any working folder will do. Slices
+ * Run every variant of `plan` on `workers` threads and fold them. Workers load the built
+ * worker beside the built CLI (dist/worker.js, plain JavaScript, as the CLI is). Slices
  * fold in whatever order they finish: min and max do not care, so the bounds are the same
  * bit for bit for any number of workers.
  */
 export async function runOnWorkers(plan: EnvelopePlan, file: string, workers: number, onDone: (variants: number) => void): Promise<EnvelopeBounds> {
-  const tsx = pathToFileURL(createRequire(import.meta.url).resolve('tsx')).href;
   const pool = new Piscina<EnvelopeTask, TaskResult>({
-    filename: new URL('./worker.ts', import.meta.url).href,
-    execArgv: ['--import', tsx],
+    filename: new URL('./worker.js', import.meta.url).href,
     minThreads: workers,
     maxThreads: workers,
     idleTimeout: 1000,
