@@ -12,7 +12,7 @@ describe('voltcast --help', () => {
       for (const option of command.options) expect(stdout, `${command.name()} ${option.flags}`).toContain(option.flags);
     }
     // The commands' options are really there, and the options that the docs name too.
-    expect(root.commands.map((c) => c.name())).toEqual(['run', 'response', 'noise', 'envelope', 'compare', 'check']);
+    expect(root.commands.map((c) => c.name())).toEqual(['run', 'response', 'noise', 'envelope', 'merge', 'compare', 'check']);
     for (const flags of ['-o, --out <dir>', '--force', '--codes-as <formats>', '-n, --runs <n>', '--signal <name>', '--margin <V|LSB>', '--phase-margin <degrees>']) expect(stdout).toContain(flags);
   });
 });

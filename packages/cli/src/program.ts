@@ -3,6 +3,7 @@ import cliPackage from '../package.json' with { type: 'json' };
 import { runCommand, type RunOptions } from './commands/run.ts';
 import { checkCommand } from './commands/check.ts';
 import { envelopeCommand, type EnvelopeCommandOptions } from './commands/envelope.ts';
+import { mergeCommand, type MergeCommandOptions } from './commands/merge.ts';
 import { compareCommand, type CompareCommandOptions } from './commands/compare.ts';
 import { responseCommand, type ResponseCommandOptions } from './commands/response.ts';
 import { noiseCommand, type NoiseCommandOptions } from './commands/noise.ts';
@@ -21,6 +22,10 @@ Examples:
       noise at each node and converter in LSB; writes out/noise-leaf-thermopile-noise/noise.{csv,json,txt}
   voltcast envelope fixtures/envelope-rc-filter.yaml --runs 500 --seed 7 --corners --plot
       tolerance envelope; writes out/envelope-rc-filter-envelope/envelope.csv
+  voltcast envelope board.yaml --runs 4000 --shard 3/8 --out parts/3
+      the third of eight slices, e.g. on the third machine; then:
+  voltcast merge parts/*/ --out out/board-envelope
+      fold the eight parts into envelope.csv, the same bytes as one run
   voltcast compare capture.csv out/board-envelope/envelope.csv --signal adc --shift auto
       check a capture against an envelope: exit 0 pass, 1 fail
 
@@ -83,7 +88,18 @@ export function program(setOutcome: (code: number) => void): Command {
     .option('--plot', 'also write plot.svg: bands, nominals and ADC codes')
     .option('-q, --quiet', 'no progress bar and no summary')
     .option('--force', "write into a folder that holds other files: voltcast's own files are replaced, every other file is left in place")
+    .option('--shard <K/N>', 'run only the K-th of N equal slices of the runs and corners and write a part for voltcast merge (one per machine or job)')
     .action((file: string, options: EnvelopeCommandOptions) => envelopeCommand(file, options));
+
+  root
+    .command('merge')
+    .description('fold the parts of an envelope run in shards (envelope --shard K/N) into the files one envelope run writes')
+    .argument('<parts...>', 'envelope-part-K-of-N.json files, or the folders envelope --shard wrote')
+    .option('-o, --out <dir>', 'output folder (default: out/<circuit name>-envelope)')
+    .option('--plot', 'also write plot.svg: bands, nominals and ADC codes')
+    .option('-q, --quiet', 'no summary')
+    .option('--force', "write into a folder that holds other files: voltcast's own files are replaced, every other file is left in place")
+    .action((parts: string[], options: MergeCommandOptions) => mergeCommand(parts, options));
 
   root
     .command('compare')

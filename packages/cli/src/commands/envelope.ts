@@ -1,16 +1,18 @@
 import { availableParallelism } from 'node:os';
 import { writeFileSync } from 'node:fs';
 import { basename, extname, join } from 'node:path';
-import { assembleEnvelope, envelopePlan, formatSI, runCircuit, type Envelope } from '@voltcast/core';
+import { assembleEnvelope, envelopePlan, runCircuit, type Envelope } from '@voltcast/core';
 import { readCircuitFile } from '../read-circuit-file.ts';
 import { writeOutputDir } from '../output/output-dir.ts';
 import { InputError } from '../exit-codes.ts';
 import { runOnWorkers } from '../envelope/run-pool.ts';
-import { writeAdcEnvelopeCsv, writeEnvelopeCsv } from '../envelope/envelope-csv.ts';
+import { writeEnvelopeFiles } from '../envelope/envelope-files.ts';
+import { envelopeSummary } from '../envelope/envelope-summary.ts';
+import { partFileName, partJson, sourceHash } from '../envelope/envelope-part.ts';
+import { parseShard, shardRange } from '../envelope/shard.ts';
+import { readTextFile } from '../read-text-file.ts';
 import { EnvelopeProgress } from '../envelope/envelope-progress.ts';
 import { estimateText } from '../envelope/estimate.ts';
-import { envelopeFigure } from '../plot/envelope-plot.ts';
-import { renderFigure } from '../plot/render-figure.ts';
 
 export interface EnvelopeCommandOptions {
   runs?: string;
@@ -21,6 +23,8 @@ export interface EnvelopeCommandOptions {
   plot?: boolean;
   quiet?: boolean;
   force?: boolean;
+  /** `K/N`: run only the K-th of N slices of the variants and write a part for voltcast merge. */
+  shard?: string;
 }
 
 /**
@@ -38,51 +42,34 @@ export async function envelopeCommand(file: string, options: EnvelopeCommandOpti
   const plan = envelopePlan(circuit, { runs, seed, corners: options.corners === true });
   if (plan.slots.length === 0) console.error(`${fileName}: warning: no part has a tolerance, so every run is the nominal one\n  add for example \`tolerance: 1%\` to resistors`);
   const startedAt = performance.now();
-  const outDir = options.out ?? join('out', `${basename(fileName, extname(fileName))}-envelope`);
+  const shard = options.shard === undefined ? undefined : parseShard(options.shard);
+  const range = shard === undefined ? { from: 0, end: plan.variants } : shardRange(plan.variants, shard);
+  const stem = `${basename(fileName, extname(fileName))}-envelope`;
+  const outDir = options.out ?? join('out', shard === undefined ? stem : `${stem}-part-${shard.index}-of-${shard.count}`);
   const { result, files } = await writeOutputDir(outDir, { force: options.force }, async (staging) => {
     const nominalStart = performance.now();
     const nominal = runCircuit(circuit);
-    const threads = Math.min(workers, Math.max(1, plan.variants));
-    const estimate = estimateText(plan.variants, threads, (performance.now() - nominalStart) / 1000);
+    const variants = range.end - range.from;
+    const threads = Math.min(workers, Math.max(1, variants));
+    const estimate = estimateText(variants, threads, (performance.now() - nominalStart) / 1000);
     if (estimate !== undefined && !options.quiet) console.error(estimate);
-    const progress = new EnvelopeProgress(plan.variants, !options.quiet);
+    const progress = new EnvelopeProgress(variants, !options.quiet);
     let result: Envelope;
     try {
-      const bounds = await runOnWorkers(plan, file, threads, (done) => progress.update(done));
+      const bounds = await runOnWorkers(plan, file, threads, (done) => progress.update(done), range);
       result = assembleEnvelope(plan, nominal, bounds);
     } finally {
       progress.stop();
     }
-    writeEnvelopeCsv(join(staging, 'envelope.csv'), result);
-    const files = ['envelope.csv'];
-    for (const adc of result.adcs) {
-      files.push(`envelope-adc-${adc.name}.csv`);
-      writeAdcEnvelopeCsv(join(staging, files.at(-1)!), adc);
+    if (shard !== undefined) {
+      const identity = { circuit: circuit.name, file: fileName, source: sourceHash(readTextFile(file, 'circuit file')), runs: plan.runs, seed: plan.seed, corners: plan.corners, variants: plan.variants };
+      writeFileSync(join(staging, partFileName(shard)), partJson({ identity, shard: { ...shard, ...range }, envelope: result }));
+      return { result, files: [partFileName(shard)] };
     }
-    if (options.plot) {
-      files.push('plot.svg');
-      writeFileSync(join(staging, 'plot.svg'), renderFigure(envelopeFigure(result, circuit.name, fileName)));
-    }
-    return { result, files };
+    return { result, files: writeEnvelopeFiles(staging, result, options.plot ? { circuitName: circuit.name, fileName } : undefined) };
   });
-  if (!options.quiet) console.log(summary(result, fileName, workers, (performance.now() - startedAt) / 1000, files.map((f) => join(outDir, f))));
-}
-
-function summary(result: Envelope, fileName: string, workers: number, wallSeconds: number, files: readonly string[]): string {
-  const widest = result.recorded.map((p) => {
-    const min = result.min.get(p)!;
-    const max = result.max.get(p)!;
-    let spread = 0;
-    for (let r = 0; r < min.length; r++) spread = Math.max(spread, max[r] - min[r]);
-    return `  ${p}: widest band ${formatSI(spread, 'V')}`;
-  });
-  return [
-    `${fileName}: envelope of ${result.runs} Monte Carlo runs (seed ${result.seed}) and ${result.corners} corners over ${result.varied.length} toleranced values`,
-    `  ${formatSI(wallSeconds, 's', 3)} wall time on ${workers} worker${workers === 1 ? '' : 's'}`,
-    ...widest,
-    'files',
-    ...files.map((f) => `  ${f}`),
-  ].join('\n');
+  const how = `on ${workers} worker${workers === 1 ? '' : 's'}${shard === undefined ? '' : `, shard ${shard.index}/${shard.count}: variants ${range.from} to ${range.end - 1} of ${plan.variants} (merge the parts with voltcast merge)`}`;
+  if (!options.quiet) console.log(envelopeSummary(result, fileName, how, (performance.now() - startedAt) / 1000, files.map((f) => join(outDir, f))));
 }
 
 function wholeNumber(text: string, option: string, min: number): number {

@@ -6,12 +6,12 @@ import type { EnvelopeTask, TaskResult } from './task.ts';
 const slicesPerWorker = 8;
 
 /**
- * Run every variant of `plan` on `workers` threads and fold them. Workers load the built
+ * Run the variants of `plan` in `range` (all by default) on `workers` threads and fold them. Workers load the built
  * worker beside the built CLI (dist/worker.js, plain JavaScript, as the CLI is). Slices
  * fold in whatever order they finish: min and max do not care, so the bounds are the same
  * bit for bit for any number of workers.
  */
-export async function runOnWorkers(plan: EnvelopePlan, file: string, workers: number, onDone: (variants: number) => void): Promise<EnvelopeBounds> {
+export async function runOnWorkers(plan: EnvelopePlan, file: string, workers: number, onDone: (variants: number) => void, range: { from: number; end: number } = { from: 0, end: plan.variants }): Promise<EnvelopeBounds> {
   const pool = new Piscina<EnvelopeTask, TaskResult>({
     filename: new URL('./worker.js', import.meta.url).href,
     minThreads: workers,
@@ -19,12 +19,12 @@ export async function runOnWorkers(plan: EnvelopePlan, file: string, workers: nu
     idleTimeout: 1000,
   });
   const parts: EnvelopeBounds[] = [];
-  const size = Math.max(1, Math.ceil(plan.variants / (workers * slicesPerWorker)));
+  const size = Math.max(1, Math.ceil((range.end - range.from) / (workers * slicesPerWorker)));
   let done = 0;
   try {
     const slices: Promise<void>[] = [];
-    for (let from = 0; from < plan.variants; from += size) {
-      const end = Math.min(plan.variants, from + size);
+    for (let from = range.from; from < range.end; from += size) {
+      const end = Math.min(range.end, from + size);
       const task: EnvelopeTask = { file, runs: plan.runs, seed: plan.seed, corners: plan.corners > 0, from, end };
       slices.push(
         pool.run(task).then((result) => {
