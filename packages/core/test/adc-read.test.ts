@@ -76,4 +76,14 @@ describe('reading the adc section', () => {
     expect(circuit).toBeDefined();
     expect(messages).toEqual(['a.yaml:8:56: warning: 1 sample time(s) lie after the end of the run (1 ms) and are never converted at adc.MCU.times\n  lengthen `duration` under simulate, or remove them']);
   });
+
+  it('a rate that makes more samples than a run can keep is refused; many samples are a warning', () => {
+    // 1 ms at 1e15 S/s is 1e12 samples (before: a raw RangeError from the typed array).
+    expect(read('  MCU: { input: out, bits: 12, range: [0, 3.3], rate: 1e15 }').messages).toEqual([
+      'a.yaml:8:55: error: rate 1e+6 GHz makes 1.0e+12 samples, more than a run can keep (1e+9) at adc.MCU.rate\n  check the prefix: k is kilo, M is mega, m is milli',
+    ]);
+    expect(read('  MCU: { input: out, bits: 12, range: [0, 3.3], rate: 20G }').messages).toEqual([
+      'a.yaml:8:55: warning: rate 20 GHz makes 20 M samples at adc.MCU.rate\n  check the prefix: k is kilo, M is mega, m is milli',
+    ]);
+  });
 });

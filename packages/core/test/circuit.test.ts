@@ -137,6 +137,17 @@ describe('errors say what, where and what to do', () => {
     expect(only(`${filter}  output-step: 20m\n`).message).toBe('output-step 20 ms is longer than the duration 10 ms');
   });
 
+  it('rows or steps too many for any run to finish are refused; a very fast stimulus is a warning', () => {
+    // 10 ms / 1 fs = 1e13 rows: past the 1e9 rows a run can write or keep.
+    expect(only(`${filter}  output-step: 1f\n`)).toMatchObject({ message: 'output-step 1 fs makes 1.0e+13 rows, more than a run can write or keep (1e+9)', position: { line: 8, column: 16 } });
+    expect(only(`${filter}  max-step: 1e-18\n`).message).toBe('max-step 0.001 fs makes 1.0e+16 steps, more than a run can finish (1e+10)');
+    expect(only(`${filter}  fixed-step: 1e-18\n`).message).toBe('fixed-step 0.001 fs makes 1.0e+16 steps, more than a run can finish (1e+10)');
+    // A 1 GHz sine over 10 ms: 1e7 periods, each several steps.
+    const fast = readCircuit(withLine(filter, 3, '  SRC: { voltage: { sine: { amplitude: 1, frequency: 1G } }, between: [in, gnd] }'));
+    expect(fast.circuit).toBeDefined();
+    expect(fast.issues.map((issue) => issue.message)).toContain("the duration 10 ms is 10 M times SRC's 1 ns (its shortest period, level or segment), and each needs several steps: expect a long run");
+  });
+
   it('a pin node touched once whose name is near another node is a misspelling', () => {
     // `out` is now lone too; the pair is one misspelling, reported once, at the later name.
     const issue = only(withLine(filter, 5, '  C1:  { capacitor: 100n, between: [ouut, gnd] }'));

@@ -63,24 +63,30 @@ describe('points', () => {
     expect(wave.nextCorner(2e-3)).toBe(4e-3);
   });
 
-  it('repeats with a period, jumping back to the first value', () => {
+  it('repeats with a period, going back to the first value on an edge of a millionth of the period', () => {
     const saw = good('{ points: [[0, 0], [1m, 1]], every: 2m }');
     expect(saw.value(0.5e-3)).toBeCloseTo(0.5, 12);
     expect(saw.value(1.5e-3)).toBe(1);
+    expect(saw.value(2e-3 - 2e-9)).toBeCloseTo(1, 6);
+    expect(saw.value(2e-3 - 1e-9)).toBeCloseTo(0.5, 6);
     expect(saw.value(2e-3)).toBe(0);
     expect(saw.value(2.5e-3)).toBeCloseTo(0.5, 12);
-    expect(corners(saw, 6)).toEqual([1e-3, 2e-3, 3e-3, 4e-3, 5e-3, 6e-3].map((_, i) => (i % 2 === 0 ? Math.floor(i / 2) * 2e-3 + 1e-3 : ((i + 1) / 2) * 2e-3)));
+    const expected = [1e-3, 2e-3 - 2e-9, 2e-3, 3e-3, 4e-3 - 2e-9, 4e-3];
+    corners(saw, 6).forEach((corner, i) => expect(corner).toBeCloseTo(expected[i], 15));
+    // A pattern that ends where it starts needs no edge.
+    const tri = good('{ points: [[0, 0], [1m, 1], [2m, 0]], every: 2m }');
+    expect(corners(tri, 3)).toEqual([1e-3, 2e-3, 3e-3]);
   });
 
   it('does not drift over many periods: corner k·period is computed, not accumulated', () => {
     const saw = good('{ points: [[0, 0], [1m, 1]], every: 2m }');
-    const visited = corners(saw, 20000);
-    expect(visited).toHaveLength(20000);
+    const visited = corners(saw, 30000);
+    expect(visited).toHaveLength(30000);
     for (let i = 1; i < visited.length; i++) expect(visited[i]).toBeGreaterThan(visited[i - 1]);
-    expect(visited[19999]).toBe(10000 * 2e-3);
-    expect(Math.abs(visited[19999] - 20)).toBeLessThan(1e-12);
-    expect(saw.value(visited[19999])).toBe(0);
-    expect(saw.value(visited[19998])).toBe(1);
+    expect(visited[29999]).toBe(10000 * 2e-3);
+    expect(Math.abs(visited[29999] - 20)).toBeLessThan(1e-12);
+    expect(saw.value(visited[29999])).toBe(0);
+    expect(saw.value(visited[29998])).toBe(1);
   });
 
   it('a late first point holds the first value in every period', () => {

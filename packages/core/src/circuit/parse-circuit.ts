@@ -34,6 +34,11 @@ export interface ReadCircuitResult {
 
 /** Above this many output rows a run is probably a typo in `output-step`. */
 const manyRows = 1e7;
+/** Above this many rows or steps a run could not finish (or its rows could not be kept): refused. */
+const mostRows = 1e9;
+const mostSteps = 1e10;
+/** Above this many of the fastest part's timescales in the duration, a run takes minutes or more. */
+const manyTimescales = 1e6;
 
 /**
  * Read and validate a circuit file. Never throws on bad input: every problem (YAML syntax,
@@ -162,6 +167,7 @@ function readSimulate(value: ValueReader | undefined, fastest: { part: string; t
   const rows = written === undefined ? defaultRows(duration, fastest) : undefined;
   const outputStep = written?.number(time, positive) ?? rows?.outputStep ?? NaN;
   if (outputStep > duration) written?.fail(`output-step ${formatSI(outputStep, 's')} is longer than the duration ${formatSI(duration, 's')}`, 'make it at most the duration, or leave it out: voltcast then chooses rows that show the fastest stimulus');
+  else if (duration / outputStep > mostRows) written?.fail(`output-step ${formatSI(outputStep, 's')} makes ${(duration / outputStep).toExponential(1)} rows, more than a run can write or keep (${mostRows.toExponential()})`, 'check the prefix: m is milli, u is micro, n is nano');
   else if (duration / outputStep > manyRows) written?.warn(`output-step ${formatSI(outputStep, 's')} makes ${formatSI(duration / outputStep, '')} rows`, 'check the prefix: m is milli, u is micro, n is nano');
   else if (fastest !== undefined && fastest.timescale < duration && outputStep > fastest.timescale / 2) {
     written?.warn(
@@ -169,13 +175,23 @@ function readSimulate(value: ValueReader | undefined, fastest: { part: string; t
       `write output-step: ${formatSI(fastest.timescale / simulateDefaults.rowsPerTimescale, 's')} or less, or leave it out for rows chosen to show it`,
     );
   }
+  if (fastest !== undefined && duration / fastest.timescale > manyTimescales) {
+    keys?.get('duration')?.warn(
+      `the duration ${formatSI(duration, 's')} is ${formatSI(duration / fastest.timescale, '')} times ${fastest.part}'s ${formatSI(fastest.timescale, 's')} (its shortest period, level or segment), and each needs several steps: expect a long run`,
+      `check ${fastest.part}'s frequency and the duration's prefix`,
+    );
+  }
   const fixedValue = keys?.get('fixed-step');
   const fixedStep = fixedValue?.number(time, positive);
   if (fixedStep !== undefined && fixedStep > duration) fixedValue?.fail(`fixed-step ${formatSI(fixedStep, 's')} is longer than the duration ${formatSI(duration, 's')}`);
+  else if (fixedStep !== undefined) refuseEndless(fixedValue!, 'fixed-step', fixedStep, duration);
+  const maxStepValue = keys?.get('max-step');
+  const maxStep = maxStepValue?.number(time, positive) ?? outputStep;
+  if (maxStepValue !== undefined) refuseEndless(maxStepValue, 'max-step', maxStep, duration);
   const settings: SimulateSettings = {
     duration,
     outputStep,
-    maxStep: keys?.numberOr('max-step', time, outputStep, positive) ?? NaN,
+    maxStep,
     fixedStep,
     accuracy: readAccuracy(keys?.get('accuracy')),
     // Above absolute zero; beyond the range parts are rated for the models mean little, but that is the user's call.
@@ -184,6 +200,11 @@ function readSimulate(value: ValueReader | undefined, fastest: { part: string; t
   };
   keys?.finish();
   return settings;
+}
+
+/** A step so short against the duration that the run could not finish in any sensible time. */
+function refuseEndless(value: ValueReader, key: string, step: number, duration: number): void {
+  if (duration / step > mostSteps) value.fail(`${key} ${formatSI(step, 's')} makes ${(duration / step).toExponential(1)} steps, more than a run can finish (${mostSteps.toExponential()})`, 'check the prefix: m is milli, u is micro, n is nano');
 }
 
 /**

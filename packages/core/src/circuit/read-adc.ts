@@ -13,6 +13,8 @@ import { samplingParts } from './adc-sampling-parts.ts';
 const lsbs: Quantity = { name: 'number of LSB', units: ['LSB'] };
 /** Above this many samples a rate is probably a prefix typo. */
 const manySamples = 1e7;
+/** Above this many samples a converter's codes could not be kept: refused. */
+const mostSamples = 1e9;
 
 /** The `adc:` section read: the converters, and the parts their sampling adds to the circuit. */
 export interface AdcSection {
@@ -141,6 +143,7 @@ function readTimes(m: MapReader, duration: number): SampleTimes {
   const rate = rateValue?.number(quantities.sampleRate, { above: 0 }) ?? NaN;
   const start = m.numberOr('start', quantities.time, 0, { min: 0 });
   if (start > duration) startValue?.fail(`start ${formatSI(start, 's')} is after the end of the run (${formatSI(duration, 's')})`, 'make it at most the duration under simulate');
+  else if ((duration - start) * rate > mostSamples) rateValue?.fail(`rate ${formatSI(rate, 'Hz')} makes ${((duration - start) * rate).toExponential(1)} samples, more than a run can keep (${mostSamples.toExponential()})`, 'check the prefix: k is kilo, M is mega, m is milli');
   else if ((duration - start) * rate > manySamples) rateValue?.warn(`rate ${formatSI(rate, 'Hz')} makes ${formatSI((duration - start) * rate, '')} samples`, 'check the prefix: k is kilo, M is mega, m is milli');
   return { rate, start };
 }

@@ -56,7 +56,10 @@ export interface SimulateOptions {
    * The array is reused between calls: copy it to keep it.
    */
   onRow?: (time: number, values: Float64Array) => void;
-  /** Called now and then (about every 1% of simulated time) with the fraction done, 0..1. */
+  /**
+   * Called now and then (every 1% of simulated time, and every 2,000 step attempts) with the
+   * fraction done, 0..1. A callback may throw to stop the run; the error comes out of `simulate`.
+   */
   onProgress?: (fraction: number) => void;
   /** When false, columns are not kept (use `onRow` to stream long runs). Default true. */
   keepColumns?: boolean;

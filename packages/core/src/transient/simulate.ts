@@ -36,6 +36,8 @@ const QUIET_STEPS = 4;
 /** Trapezoidal steps before exact steps are tried again after a stretch broke off early; doubles each time it breaks off again. */
 const EXACT_RETRY_FIRST = 8;
 const EXACT_RETRY_MOST = 4096;
+/** Step attempts between progress reports, besides every 1% of simulated time. */
+const PROGRESS_EVERY_ATTEMPTS = 2000;
 
 /**
  * Transient analysis: operating point at t = 0, then steps of two kinds. Where the circuit is
@@ -109,7 +111,12 @@ export function simulate(circuit: Circuit, options: SimulateOptions = {}): Trans
   /** Accepted trapezoidal steps in a row that needed no new factorization. */
   let quiet = 0;
 
+  let attempts = 0;
+  /** The last trapezoidal try was rejected (error too large, no convergence, or bisecting onto an event). */
+  let retrying = false;
   while (t < duration - eps) {
+    // A heartbeat every so many attempts, accepted or not: a run stuck on hard steps still reports (and can be stopped from the callback).
+    if (++attempts % PROGRESS_EVERY_ATTEMPTS === 0) options.onProgress?.(t / duration);
     const target = Math.min(corner, landings.next(), duration);
     if (exact) {
       // No error control: as long as the landing points and max-step allow, in equal steps.
@@ -153,7 +160,9 @@ export function simulate(circuit: Circuit, options: SimulateOptions = {}): Trans
     let h = cut < Infinity ? cut : fixed !== undefined ? Math.min(natural, fixed) : sinceCorner === 0 ? Math.min(natural, corner - t) * FIRST_STEP_FRACTION : natural;
     h = Math.min(h, maxStep);
     let landing = false;
-    if (t + h >= target - eps) {
+    // Stretch onto a landing point within eps, unless the last try was rejected: then the step
+    // must shrink (a step that ends within eps of the point has reached it).
+    if (t + h >= target - eps && (!retrying || h >= target - t)) {
       h = target - t;
       landing = true;
     } else if (fixed === undefined) {
@@ -174,6 +183,7 @@ export function simulate(circuit: Circuit, options: SimulateOptions = {}): Trans
     if (!equations.solve(step, trial)) {
       stats.newtonFailures++;
       stats.rejectedSteps++;
+      retrying = true;
       natural = h / 8;
       if (cut < Infinity) cut = natural;
       if (natural < floor) throw stuck(t, equations.worstUnknowns(x, trial, 3), 'Newton iterations did not converge');
@@ -183,6 +193,7 @@ export function simulate(circuit: Circuit, options: SimulateOptions = {}): Trans
     const event = equations.regionChanged(x, trial);
     if (event && h > eventResolution) {
       stats.rejectedSteps++;
+      retrying = true;
       cut = h / 2;
       continue;
     }
@@ -192,6 +203,7 @@ export function simulate(circuit: Circuit, options: SimulateOptions = {}): Trans
       const proposal = ratio === 0 ? h * MAX_GROWTH : h * Math.min(MAX_GROWTH, SAFETY * Math.pow(ratio, -1 / (order + 1)));
       if (ratio > 1) {
         stats.rejectedSteps++;
+        retrying = true;
         natural = Math.max(proposal, h * 0.1);
         if (cut < Infinity) cut = natural;
         if (natural < floor) throw stuck(t, [topology.labels[worst.index]], 'the local truncation error stayed above tolerance');
@@ -207,6 +219,7 @@ export function simulate(circuit: Circuit, options: SimulateOptions = {}): Trans
     equations.accept(trial, step);
     x.set(trial);
     t = step.t;
+    retrying = false;
     lastH = h;
     stats.acceptedSteps++;
     if (step.method === 'be') stats.dampingSteps++;

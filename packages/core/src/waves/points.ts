@@ -7,19 +7,24 @@ import { nextPeriodicCorner, timeInPeriod } from './periodic.ts';
 /**
  * Straight lines between given points; the first value holds before the first point and the
  * last value after the last point. With a period (`every:`) the pattern (including that hold)
- * restarts at every multiple of the period, jumping back to the first value.
+ * restarts at every multiple of the period, going back to the first value on a straight edge
+ * over the period's last millionth: a true jump has no step short enough to cross it within
+ * the error tolerance, so the simulation would stop there.
  */
 export class PiecewiseLinearWave implements Wave {
   /** Corner offsets within one period: 0 and every point time below the period. */
   private readonly periodCorners: Float64Array;
+  private readonly times: Float64Array;
+  private readonly values: Float64Array;
 
   constructor(
-    private readonly times: Float64Array,
-    private readonly values: Float64Array,
+    times: Float64Array,
+    values: Float64Array,
     /** Infinity when the pattern does not repeat. */
     private readonly period: number,
   ) {
-    const inside = Array.from(times).filter((t) => t > 0 && t < period);
+    [this.times, this.values] = period < Infinity ? withWrapEdge(times, values, period) : [times, values];
+    const inside = Array.from(this.times).filter((t) => t > 0 && t < period);
     this.periodCorners = Float64Array.from([0, ...inside]);
   }
 
@@ -58,7 +63,8 @@ export class PiecewiseLinearWave implements Wave {
       previous = i;
       direction = d;
     }
-    return narrowest;
+    // A repeating pattern that changes at all comes back every period.
+    return this.period < Infinity && direction !== 0 ? Math.min(narrowest, this.period) : narrowest;
   }
 
   nextCorner(t: number): number {
@@ -75,6 +81,26 @@ export class PiecewiseLinearWave implements Wave {
     }
     return times[lo];
   }
+}
+
+/** The edge back to the first value takes this share of the period. */
+const WRAP_EDGE = 1e-6;
+
+/**
+ * The points of one period, ending with a straight edge from the pattern's value at
+ * period·(1 − WRAP_EDGE) to the first value at the period.
+ */
+function withWrapEdge(times: Float64Array, values: Float64Array, period: number): [Float64Array, Float64Array] {
+  const last = times.length - 1;
+  if (values[last] === values[0]) return [times, values];
+  const start = period * (1 - WRAP_EDGE);
+  // Interpolate the edge's start on the pattern as written (a hold after the last point, or its last segment).
+  const at = new PiecewiseLinearWave(times, values, Infinity).value(start);
+  const kept = Array.from(times).filter((t) => t < start).length;
+  return [
+    Float64Array.from([...times.subarray(0, kept), start, period]),
+    Float64Array.from([...values.subarray(0, kept), at, values[0]]),
+  ];
 }
 
 /**
