@@ -97,7 +97,7 @@ function attempt(text: string, fileName: string): Outcome {
 }
 
 describe('hostile and extreme input (seeded fuzz of the fixtures)', () => {
-  const runs = Number(process.env.VOLTCAST_FUZZ_RUNS ?? 300);
+  const runs = Number(process.env.VOLTCAST_FUZZ_RUNS ?? 2000);
   it('ends every case in a clean error or a finite result, in bounded time', { timeout: 300_000 }, () => {
     const tally = new Map<Outcome, number>();
     const stuck: string[] = [];

@@ -55,7 +55,7 @@ describe('reading the adc section', () => {
     const { messages } = read('  MCU: { input: [out, out], bits: 30, range: [3.3, 0], rate: 20k, times: [1m], coding: twos, sampling: { capacitance: 10p, resistance: 1k, acquisition: 60u } }');
     expect(messages).toEqual([
       "a.yaml:8:17: error: both ends of the differential input are 'out' at adc.MCU.input\n  write `input: [p, n]` with two different nodes",
-      'a.yaml:8:35: error: bits must be at most 24, found 30 at adc.MCU.bits',
+      'a.yaml:8:35: error: bits must be at most 24, found 30 at adc.MCU.bits\n  write a number of 24 or less',
       "a.yaml:8:46: error: the range's high end (0 V) must be above its low end (3.3 V) at adc.MCU.range\n  write `range: [low, high]`",
       'a.yaml:8:74: error: an ADC takes `rate:` or `times:`, not both at adc.MCU.times\n  keep `rate:` (with `start:`) for regular sampling, or `times:` for listed instants',
       "a.yaml:8:88: error: 'twos' is not one of unsigned, offset-binary, twos-complement at adc.MCU.coding\n  choose one of: unsigned, offset-binary, twos-complement",

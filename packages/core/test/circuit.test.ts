@@ -137,6 +137,37 @@ describe('errors say what, where and what to do', () => {
     expect(only(`${filter}  output-step: 20m\n`).message).toBe('output-step 20 ms is longer than the duration 10 ms');
   });
 
+  it('brackets nested thousands deep are "nested too deeply", at the place they pass 100 levels', () => {
+    // Before: "YAML: Maximum call stack size exceeded", from the second parser's recursion.
+    const issue = only(`${filter}extra: ${'['.repeat(20_000)}${']'.repeat(20_000)}\n`);
+    expect(issue).toMatchObject({ message: 'YAML: nested too deeply (more than 100 levels of brackets)', position: { line: 8, column: 108 } });
+    expect(issue.hint).toMatch(/run of \[ or \{/);
+  });
+
+  it('values beyond any physical size are refused where written', () => {
+    // Before: a -9e303 V point ran, and a slew finding's average rate came out as Infinity.
+    expect(only(withLine(filter, 3, '  SRC: { voltage: { points: [[0, -9e303], [1m, 0]] }, between: [in, gnd] }'))).toMatchObject({
+      message: 'voltage -9e303 is beyond any physical value',
+      hint: 'check the exponent: values lie between 1e-100 and 1e+100 in size',
+      position: { line: 3, column: 34 },
+    });
+    expect(only(withLine(filter, 5, '  C1:  { capacitor: 1e-264, between: [out, gnd], initial: 0 }')).message).toBe('capacitor 1e-264 is closer to zero than any physical value');
+  });
+
+  it('a value of the wrong shape says what to write', () => {
+    // Before, these four had no hint.
+    const hints = [
+      withLine(filter, 4, '  R1:  { resistor: [1, 2], between: [in, out] }'),
+      withLine(filter, 4, '  R1:  { resistor: 10k, between: in }'),
+      `${filter}  accuracy: 5\n`,
+      `${filter}  accuracy: { relative: 1e-4 }\nadc: { A: { input: out, bits: 12, range: [0, 1], rate: 1k, coding: [a] } }\n`,
+    ].map((text) => errors(text).find((issue) => issue.message.startsWith('expected'))?.hint);
+    expect(hints[0]).toMatch(/^write a number with an optional SI prefix .* like /);
+    expect(hints[1]).toBe('write the items in brackets, separated by commas: [a, b]');
+    expect(hints[2]).toMatch(/^write the keys in braces/);
+    expect(hints[3]).toBe('write one word or name here, without brackets or braces');
+  });
+
   it('rows or steps too many for any run to finish are refused; a very fast stimulus is a warning', () => {
     // 10 ms / 1 fs = 1e13 rows: past the 1e9 rows a run can write or keep.
     expect(only(`${filter}  output-step: 1f\n`)).toMatchObject({ message: 'output-step 1 fs makes 1.0e+13 rows, more than a run can write or keep (1e+9)', position: { line: 8, column: 16 } });
@@ -146,6 +177,9 @@ describe('errors say what, where and what to do', () => {
     const fast = readCircuit(withLine(filter, 3, '  SRC: { voltage: { sine: { amplitude: 1, frequency: 1G } }, between: [in, gnd] }'));
     expect(fast.circuit).toBeDefined();
     expect(fast.issues.map((issue) => issue.message)).toContain("the duration 10 ms is 10 M times SRC's 1 ns (its shortest period, level or segment), and each needs several steps: expect a long run");
+    // A switch every picosecond for a day: 8.6e16 periods, past the steps a run can take (and past 2^53, where period arithmetic loses whole periods).
+    const endless = only(withLine(filter, 3, '  SRC: { voltage: 1, between: [in, gnd] }\n  S1: { switch: 50, closed: [[0, 0.5p]], every: 1p, between: [in, gnd] }').replace('duration: 10m', 'duration: 86400'));
+    expect(endless.message).toBe("the duration 86.4 ks is 1.7e+17 times S1's 500 fs (its shortest period, level or segment): more steps than a run can finish (1e+10)");
   });
 
   it('a pin node touched once whose name is near another node is a misspelling', () => {

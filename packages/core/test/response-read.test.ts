@@ -43,7 +43,7 @@ describe('reading the response section', () => {
     const { messages } = read('{ input: VIN, to: 1M, per-decade: 2.5, step: 3 }');
     expect(messages).toHaveLength(3);
     expect(messages[0]).toMatch(/^a\.yaml:7:11: error: missing key 'from'.*\n  write `from: 10`, the lowest frequency in Hz$/);
-    expect(messages[1]).toBe('a.yaml:7:45: error: per-decade must be a whole number, found 2.5 at response.per-decade');
+    expect(messages[1]).toBe('a.yaml:7:45: error: per-decade must be a whole number, found 2.5 at response.per-decade\n  write it without a fraction, e.g. 12');
     expect(messages[2]).toMatch(/^a\.yaml:7:\d+: error: unknown key 'step'/);
     expect(read('[10, 1M]').messages).toEqual(['a.yaml:7:11: error: `response` must be a map of keys at response\n  for example `response: { input: VIN, from: 10, to: 1M }`']);
   });

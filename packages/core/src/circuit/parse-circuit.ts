@@ -175,7 +175,12 @@ function readSimulate(value: ValueReader | undefined, fastest: { part: string; t
       `write output-step: ${formatSI(fastest.timescale / simulateDefaults.rowsPerTimescale, 's')} or less, or leave it out for rows chosen to show it`,
     );
   }
-  if (fastest !== undefined && duration / fastest.timescale > manyTimescales) {
+  if (fastest !== undefined && duration / fastest.timescale > mostSteps) {
+    keys?.get('duration')?.fail(
+      `the duration ${formatSI(duration, 's')} is ${(duration / fastest.timescale).toExponential(1)} times ${fastest.part}'s ${formatSI(fastest.timescale, 's')} (its shortest period, level or segment): more steps than a run can finish (${mostSteps.toExponential()})`,
+      `check ${fastest.part}'s frequency and the duration's prefix`,
+    );
+  } else if (fastest !== undefined && duration / fastest.timescale > manyTimescales) {
     keys?.get('duration')?.warn(
       `the duration ${formatSI(duration, 's')} is ${formatSI(duration / fastest.timescale, '')} times ${fastest.part}'s ${formatSI(fastest.timescale, 's')} (its shortest period, level or segment), and each needs several steps: expect a long run`,
       `check ${fastest.part}'s frequency and the duration's prefix`,

@@ -3,7 +3,7 @@ import type { MapReader, NumberLimits, ValueReader } from './reader.ts';
 import { suggestion } from './suggest.ts';
 import type { LineIndex, YamlNode } from './yaml-tree.ts';
 import type { Quantity } from '../units/quantity.ts';
-import { parseQuantity } from '../units/si.ts';
+import { parseQuantity, quantityHint } from '../units/si.ts';
 import { formatSI } from '../units/format.ts';
 
 type Path = readonly (string | number)[];
@@ -28,6 +28,9 @@ export class IssueSink {
  * A value of the YAML document, read as the circuit format reads values. Failed reads record
  * an issue and return a placeholder, so one pass finds every problem.
  */
+/** Values at or beyond this size (or at or below its inverse, besides 0) are typing slips, and would overflow the arithmetic. */
+const PHYSICAL = 1e100;
+
 export class YamlValue implements ValueReader {
   readonly position?: SourcePosition;
   readonly part?: string;
@@ -54,7 +57,7 @@ export class YamlValue implements ValueReader {
   number(quantity: Quantity, limits?: NumberLimits): number {
     const raw = this.scalar();
     if (typeof raw !== 'number' && typeof raw !== 'string') {
-      this.fail(`expected a ${quantity.name}, found ${this.describe()}`);
+      this.fail(`expected a ${quantity.name}, found ${this.describe()}`, quantityHint(quantity));
       return NaN;
     }
     const parsed = parseQuantity(raw, quantity);
@@ -62,14 +65,25 @@ export class YamlValue implements ValueReader {
       this.fail(parsed.error, parsed.hint);
       return NaN;
     }
+    const size = Math.abs(parsed.value);
+    if (size >= PHYSICAL || (size > 0 && size <= 1 / PHYSICAL)) {
+      this.fail(`${this.what(quantity)} ${this.source()} is ${size > 1 ? 'beyond' : 'closer to zero than'} any physical value`, `check the exponent: values lie between ${1 / PHYSICAL} and ${PHYSICAL} in size${size > 1 ? '' : ', or write 0'}`);
+      return NaN;
+    }
     return limits === undefined ? parsed.value : this.checkLimits(parsed.value, quantity, limits);
+  }
+
+  /** The value's name for messages: its key (`duration must be ...`) when it has one. */
+  private what(quantity: Quantity): string {
+    const key = this.path[this.path.length - 1];
+    return typeof key === 'string' ? key : quantity.name;
   }
 
   text(): string {
     const raw = this.scalar();
     if (typeof raw === 'string') return raw;
     if (typeof raw === 'number') return this.source();
-    this.fail(`expected text, found ${this.describe()}`);
+    this.fail(`expected text, found ${this.describe()}`, 'write one word or name here, without brackets or braces');
     return '';
   }
 
@@ -93,7 +107,7 @@ export class YamlValue implements ValueReader {
 
   list(): ValueReader[] {
     if (this.yaml?.kind !== 'list') {
-      this.fail(`expected a list like [a, b], found ${this.describe()}`);
+      this.fail(`expected a list like [a, b], found ${this.describe()}`, 'write the items in brackets, separated by commas: [a, b]');
       return [];
     }
     return this.yaml.items.map((item, i) => new YamlValue(this.sink, item, [...this.path, i], this.position));
@@ -102,7 +116,7 @@ export class YamlValue implements ValueReader {
   map(): MapReader {
     if (this.mapReader === undefined) {
       const isMap = this.yaml?.kind === 'map';
-      if (!isMap) this.fail(`expected a map of key: value pairs, found ${this.describe()}`);
+      if (!isMap) this.fail(`expected a map of key: value pairs, found ${this.describe()}`, 'write the keys in braces, { key: value, other: value }, or indented on the lines below');
       this.mapReader = new YamlMap(this.sink, isMap ? this.yaml : undefined, this.path, this.position);
     }
     return this.mapReader;
@@ -151,17 +165,15 @@ export class YamlValue implements ValueReader {
     const unit = quantity.units[0] ?? '';
     const shown = (n: number) => formatSI(n, unit.includes('/') ? '' : unit, 6);
     const found = `found ${this.describe()}`;
-    // Name the value by its key (`duration must be ...`) when it has one.
-    const key = this.path[this.path.length - 1];
-    const what = typeof key === 'string' ? key : quantity.name;
+    const what = this.what(quantity);
     if (limits.above !== undefined && !(value > limits.above)) {
-      this.fail(`${what} must be greater than ${shown(limits.above)}, ${found}`);
+      this.fail(`${what} must be greater than ${shown(limits.above)}, ${found}`, `write a ${quantity.name} above ${shown(limits.above)}`);
     } else if (limits.min !== undefined && !(value >= limits.min)) {
-      this.fail(`${what} must be at least ${shown(limits.min)}, ${found}`);
+      this.fail(`${what} must be at least ${shown(limits.min)}, ${found}`, `write a ${quantity.name} of ${shown(limits.min)} or more`);
     } else if (limits.max !== undefined && !(value <= limits.max)) {
-      this.fail(`${what} must be at most ${shown(limits.max)}, ${found}`);
+      this.fail(`${what} must be at most ${shown(limits.max)}, ${found}`, `write a ${quantity.name} of ${shown(limits.max)} or less`);
     } else if (limits.integer && !Number.isInteger(value)) {
-      this.fail(`${what} must be a whole number, ${found}`);
+      this.fail(`${what} must be a whole number, ${found}`, 'write it without a fraction, e.g. 12');
     } else {
       return value;
     }

@@ -93,12 +93,14 @@ function whyNot(suffix: string, q: Quantity): string {
 }
 
 function invalid(text: string, q: Quantity, reason?: string): { error: string; hint: string } {
+  return { error: `'${text}' is not a ${q.name}${reason ? `: ${reason}` : ''}`, hint: quantityHint(q) };
+}
+
+/** How to write a value of the quantity, for any message about one. */
+export function quantityHint(q: Quantity): string {
   const unit = q.units.length > 0 ? ` and unit (${q.units.join(', ')})` : '';
   const example = examples[q.name] ?? `1.5k${q.units[0] ?? ''}`;
   const extras = [q.decibels ? 'dB' : '', q.percent ? '%' : ''].filter((s) => s !== '');
   const notation = extras.length > 0 ? `, or ${extras.join(' or ')}` : '';
-  return {
-    error: `'${text}' is not a ${q.name}${reason ? `: ${reason}` : ''}`,
-    hint: `write a number with an optional SI prefix (f p n u µ m k M G; m is milli, M is mega)${unit}${notation}, like ${example}`,
-  };
+  return `write a number with an optional SI prefix (f p n u µ m k M G; m is milli, M is mega)${unit}${notation}, like ${example}`;
 }
