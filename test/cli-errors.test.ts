@@ -115,6 +115,15 @@ describe('usage errors exit 2', () => {
     expect(readdirSync(scratch)).toEqual([]);
   });
 
+  test('a circuit file past 10 MB is refused before it is read (before: minutes and gigabytes)', async (context) => {
+    const scratch = scratchFor(context);
+    const file = join(scratch, 'huge.yaml');
+    writeFileSync(file, `${good}${'# padding\n'.repeat(1_100_000)}`);
+    const { code, stderr } = await runCli(['check', file]);
+    expect(code).toBe(2);
+    expect(stderr).toContain(`circuit file ${file} is 11 MB, more than the 10 MB voltcast reads as a circuit file\n  check that this is the file you meant`);
+  });
+
   test('an unknown option', async (context) => {
     const scratch = scratchFor(context);
     writeFileSync(join(scratch, 'good.yaml'), good);

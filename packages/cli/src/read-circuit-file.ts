@@ -1,8 +1,13 @@
-import { readFileSync } from 'node:fs';
+import { readFileSync, statSync } from 'node:fs';
 import { dirname, join } from 'node:path';
 import { readCircuit, formatIssue, type Circuit } from '@voltcast/core';
 import { InputError } from './exit-codes.ts';
 import { readTextFile, reasonOf } from './read-text-file.ts';
+
+/** A circuit file is typed by people: past this it is the wrong file (reading it would take minutes and gigabytes). */
+const CIRCUIT_MOST_BYTES = 10e6;
+/** A file wave's points: a long capture fits; past this the memory for its points runs out. */
+const WAVE_MOST_BYTES = 200e6;
 
 /** A circuit read from disk, with the warnings the reader found (already formatted). */
 export interface CircuitFile {
@@ -19,7 +24,7 @@ export interface CircuitFile {
  * included, so one run shows everything to fix.
  */
 export function readCircuitFile(fileName: string): CircuitFile {
-  const text = readTextFile(fileName, 'circuit file');
+  const text = readTextFile(fileName, 'circuit file', CIRCUIT_MOST_BYTES);
   const folder = dirname(fileName);
   const { circuit, issues } = readCircuit(text, {
     fileName,
@@ -27,8 +32,11 @@ export function readCircuitFile(fileName: string): CircuitFile {
     readFile: (relativePath: string) => {
       const path = join(folder, relativePath);
       try {
+        const size = statSync(path).size;
+        if (size > WAVE_MOST_BYTES) throw new Error(`it is ${Math.round(size / 1e6)} MB, more than the ${WAVE_MOST_BYTES / 1e6} MB a wave's points may take (looked at ${path})`);
         return readFileSync(path, 'utf8');
       } catch (error) {
+        if (!(error as NodeJS.ErrnoException).code) throw error;
         throw new Error(`${reasonOf(error)} (looked for ${path})`);
       }
     },

@@ -1,4 +1,4 @@
-import { readFileSync } from 'node:fs';
+import { readFileSync, statSync } from 'node:fs';
 import { resolve } from 'node:path';
 import { InputError } from './exit-codes.ts';
 
@@ -6,12 +6,21 @@ import { InputError } from './exit-codes.ts';
  * The text of a file the user named. A file that cannot be read is bad input (exit 2): the
  * message says which file (`what`, e.g. "circuit file"), why in words, and where we looked.
  */
-export function readTextFile(path: string, what: string): string {
+export function readTextFile(path: string, what: string, mostBytes = Infinity): string {
   try {
+    const size = statSync(path).size;
+    if (size > mostBytes) {
+      throw new InputError(`${what} ${path} is ${megabytes(size)}, more than the ${megabytes(mostBytes)} voltcast reads as a ${what}\n  check that this is the file you meant`);
+    }
     return readFileSync(path, 'utf8');
   } catch (error) {
+    if (error instanceof InputError) throw error;
     throw new InputError(`cannot read ${what} ${path}: ${reasonOf(error)} (looked for ${resolve(path)})`);
   }
+}
+
+function megabytes(bytes: number): string {
+  return `${Number((bytes / 1e6).toPrecision(3))} MB`;
 }
 
 const reasons: Readonly<Record<string, string>> = {

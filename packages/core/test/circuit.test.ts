@@ -154,6 +154,12 @@ describe('errors say what, where and what to do', () => {
     expect(only(withLine(filter, 5, '  C1:  { capacitor: 1e-264, between: [out, gnd], initial: 0 }')).message).toBe('capacitor 1e-264 is closer to zero than any physical value');
   });
 
+  it('a node name of a million characters is refused, and the message quotes only its start', () => {
+    const issue = only(`${filter}record: [${'x'.repeat(1_000_000)}]\n`);
+    expect(issue.message).toBe(`node name '${'x'.repeat(40)}…' is 1000000 characters long`);
+    expect(issue.hint).toBe('node names become CSV column names: keep them to 200 characters');
+  });
+
   it('a value of the wrong shape says what to write', () => {
     // Before, these four had no hint.
     const hints = [

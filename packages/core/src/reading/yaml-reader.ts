@@ -31,6 +31,9 @@ export class IssueSink {
 /** Values at or beyond this size (or at or below its inverse, besides 0) are typing slips, and would overflow the arithmetic. */
 const PHYSICAL = 1e100;
 
+/** Longer node names are slips (a pasted block of text), and would fill every message. */
+const LONGEST_NAME = 200;
+
 export class YamlValue implements ValueReader {
   readonly position?: SourcePosition;
   readonly part?: string;
@@ -96,6 +99,10 @@ export class YamlValue implements ValueReader {
     const name = typeof raw === 'number' ? this.source() : raw;
     if (name === '') {
       this.fail('a node name cannot be empty', 'write a name such as in, out or gnd');
+      return '';
+    }
+    if (name.length > LONGEST_NAME) {
+      this.fail(`node name '${name.slice(0, 40)}…' is ${name.length} characters long`, `node names become CSV column names: keep them to ${LONGEST_NAME} characters`);
       return '';
     }
     if (/[\s,"]/.test(name)) {
