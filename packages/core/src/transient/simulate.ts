@@ -111,12 +111,15 @@ export function simulate(circuit: Circuit, options: SimulateOptions = {}): Trans
   /** Accepted trapezoidal steps in a row that needed no new factorization. */
   let quiet = 0;
 
-  let attempts = 0;
+  let untilHeartbeat = PROGRESS_EVERY_ATTEMPTS;
   /** The last trapezoidal try was rejected (error too large, no convergence, or bisecting onto an event). */
   let retrying = false;
   while (t < duration - eps) {
     // A heartbeat every so many attempts, accepted or not: a run stuck on hard steps still reports (and can be stopped from the callback).
-    if (++attempts % PROGRESS_EVERY_ATTEMPTS === 0) options.onProgress?.(t / duration);
+    if (--untilHeartbeat === 0) {
+      untilHeartbeat = PROGRESS_EVERY_ATTEMPTS;
+      options.onProgress?.(t / duration);
+    }
     const target = Math.min(corner, landings.next(), duration);
     if (exact) {
       // No error control: as long as the landing points and max-step allow, in equal steps.
