@@ -8,6 +8,7 @@ import { TwoStepGuard } from '../ringing/two-step-guard.ts';
 import { SaturationTracker } from '../saturation/saturation-tracker.ts';
 import { ampDriving, ringingHint, saturationHint } from './hints.ts';
 import { stageShape } from './stage-shape.ts';
+import { unstableBalances } from './unstable-balance.ts';
 import { FINDINGS_SCHEMA, type Findings, type FindingsOptions } from './types.ts';
 
 /**
@@ -54,7 +55,7 @@ export class FindingsWatch {
       const hint = amp ? ringingHint(finding, amp, shapes.get(amp.name)!.shape) : undefined;
       return hint ? { ...finding, hint } : finding;
     });
-    const allWarnings = [...this.guard.warnings(), ...warnings].sort((a, b) => (a.time ?? 0) - (b.time ?? 0));
+    const allWarnings = [...unstableBalances(circuit), ...this.guard.warnings(), ...warnings].sort((a, b) => (a.time ?? 0) - (b.time ?? 0));
     return {
       schema: FINDINGS_SCHEMA,
       saturation,
