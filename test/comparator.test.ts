@@ -108,7 +108,7 @@ record: [irq]
         severity: 'error',
         part: 'CMP',
         position: { line: 4, column: 73 },
-        message: "node 'irq' at out of CMP has no DC path through any other part: an open-drain output only pulls low, so its voltage is undefined while it is off",
+        message: "node 'irq' at out of CMP is joined to nothing else that conducts at DC: an open-drain output only pulls low, so its voltage is undefined while it is off",
         hint: 'add a pull-up resistor to vcc, e.g. R_PULLUP: { resistor: 10k, between: [irq, vcc] }, or write `output: push-pull`',
       },
     ]);

@@ -13,7 +13,7 @@ const retired: readonly [RegExp, string][] = [
   [/\b(relative|voltage|current)-tolerance\b/, 'the flat tolerance keys (now `accuracy: { relative, volts, amps }`)'],
   [/\brepeat\s*:/, 'the `repeat:` key (now `every:`)'],
   [/measureOscillation/, 'measureOscillation (now oscillationFigures)'],
-  [/no DC path to gnd/, 'the old floating-node message'],
+  [/no DC path/, 'the old floating-node and open-pin wording'],
 ];
 
 const roots = ['packages/core/src', 'packages/cli/src', 'packages/core/test', 'packages/cli/test', 'test', 'bench', 'docs', 'fixtures', 'README.md', 'DEVELOPERS.md'];

@@ -6,8 +6,8 @@ import type { IssueSink } from '../reading/yaml-reader.ts';
 import { ground } from './connections.ts';
 
 /**
- * Every pin a part leaves open at times (an open-drain output) needs a DC path through another
- * part (a pull-up), or its voltage is undefined whenever it is open. The parts' own devices say
+ * Every pin a part leaves open at times (an open-drain output) needs another part that conducts
+ * at DC on its node (a pull-up), or its voltage is undefined whenever it is open. The parts' own devices say
  * which pins those are and what conducts at DC (`links`), so the check knows no part kind.
  */
 export function checkOpenPins(parts: readonly PartSpecBase[], settings: SimulateSettings, sink: IssueSink): void {
@@ -23,7 +23,7 @@ export function checkOpenPins(parts: readonly PartSpecBase[], settings: Simulate
       if (held) continue;
       sink.add({
         severity: 'error',
-        message: `node '${pin.node}' at ${open.pin} of ${device.name} has no DC path through any other part: ${open.why}, so its voltage is undefined while it is off`,
+        message: `node '${pin.node}' at ${open.pin} of ${device.name} is joined to nothing else that conducts at DC: ${open.why}, so its voltage is undefined while it is off`,
         hint: open.hint,
         path: pin.path,
         part: device.name,

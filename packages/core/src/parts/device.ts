@@ -63,8 +63,8 @@ export interface Device {
   /** How the device connects its pins, for diagnosing a singular matrix by cause. */
   links(): readonly Link[];
   /**
-   * Pins the device leaves without a DC path at times (an open-drain output that is off):
-   * reading a circuit checks that another part gives each of them one.
+   * Pins the device leaves with nothing conducting at DC at times (an open-drain output that
+   * is off): reading a circuit checks that another part on each of their nodes conducts.
    */
   openPins?(): readonly OpenPin[];
   /**
@@ -99,9 +99,9 @@ export interface NoiseSource {
 }
 
 /**
- * `conductive`: a DC path (resistor, inductor, source output). `voltage`: fixes the voltage
+ * `conductive`: conducts at DC (resistor, inductor, source output). `voltage`: fixes the voltage
  * between its ends (voltage source, inductor at DC, amplifier output); a loop of these is
- * singular. `none`: no DC path (capacitor, current source).
+ * singular. `none`: does not conduct at DC (capacitor, current source).
  */
 export interface Link {
   readonly a: number;
@@ -109,7 +109,7 @@ export interface Link {
   readonly kind: 'conductive' | 'voltage' | 'none';
 }
 
-/** A pin that needs a DC path through another part, with why and what to do, for the message. */
+/** A pin that needs another part conducting at DC on its node, with why and what to do, for the message. */
 export interface OpenPin {
   readonly pin: string;
   readonly why: string;

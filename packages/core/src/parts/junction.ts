@@ -3,7 +3,7 @@ import type { DiodeParameters } from './diode-presets.ts';
 
 /** Reverse current at the breakdown voltage: `breakdown:` is the reverse voltage at this current. */
 export const BREAKDOWN_CURRENT = 1e-3;
-/** Conductance across every junction, so that a reverse-biased one never leaves a node without a DC path (common practice). */
+/** Conductance across every junction, so that a reverse-biased one never leaves a node with nothing that conducts at DC (common practice). */
 const GMIN = 1e-12;
 /** Beyond this exponent the exponentials continue along their tangent: finite for any voltage. */
 const MAX_EXPONENT = 80;
