@@ -1,8 +1,7 @@
-import { readFileSync, statSync } from 'node:fs';
 import { dirname, join } from 'node:path';
 import { readCircuit, formatIssue, type Circuit } from '@voltcast/core';
 import { InputError } from './exit-codes.ts';
-import { readTextFile, reasonOf } from './read-text-file.ts';
+import { readTextFile, readTextWithin, reasonOf } from './read-text-file.ts';
 
 /** A circuit file is typed by people: past this it is the wrong file (reading it would take minutes and gigabytes). */
 const CIRCUIT_MOST_BYTES = 10e6;
@@ -32,11 +31,8 @@ export function readCircuitFile(fileName: string): CircuitFile {
     readFile: (relativePath: string) => {
       const path = join(folder, relativePath);
       try {
-        const size = statSync(path).size;
-        if (size > WAVE_MOST_BYTES) throw new Error(`it is ${Math.round(size / 1e6)} MB, more than the ${WAVE_MOST_BYTES / 1e6} MB a wave's points may take (looked at ${path})`);
-        return readFileSync(path, 'utf8');
+        return readTextWithin(path, WAVE_MOST_BYTES);
       } catch (error) {
-        if (!(error as NodeJS.ErrnoException).code) throw error;
         throw new Error(`${reasonOf(error)} (looked for ${path})`);
       }
     },

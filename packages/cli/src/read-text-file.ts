@@ -8,15 +8,30 @@ import { InputError } from './exit-codes.ts';
  */
 export function readTextFile(path: string, what: string, mostBytes = Infinity): string {
   try {
-    const size = statSync(path).size;
-    if (size > mostBytes) {
-      throw new InputError(`${what} ${path} is ${megabytes(size)}, more than the ${megabytes(mostBytes)} voltcast reads as a ${what}\n  check that this is the file you meant`);
-    }
-    return readFileSync(path, 'utf8');
+    return readTextWithin(path, mostBytes);
   } catch (error) {
-    if (error instanceof InputError) throw error;
+    if (error instanceof FileTooLarge) {
+      throw new InputError(`${what} ${path} is ${megabytes(error.size)}, more than the ${megabytes(error.most)} voltcast reads as a ${what}\n  check that this is the file you meant`);
+    }
     throw new InputError(`cannot read ${what} ${path}: ${reasonOf(error)} (looked for ${resolve(path)})`);
   }
+}
+
+/** A file larger than voltcast reads for its purpose: refused before it is read. */
+class FileTooLarge extends Error {
+  constructor(
+    readonly size: number,
+    readonly most: number,
+  ) {
+    super(`it is ${megabytes(size)}, more than the ${megabytes(most)} voltcast reads`);
+  }
+}
+
+/** The text of `path`, refusing one larger than `mostBytes` (a `FileTooLarge`) before reading it. */
+export function readTextWithin(path: string, mostBytes: number): string {
+  const size = statSync(path).size;
+  if (size > mostBytes) throw new FileTooLarge(size, mostBytes);
+  return readFileSync(path, 'utf8');
 }
 
 function megabytes(bytes: number): string {

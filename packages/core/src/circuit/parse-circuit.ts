@@ -32,6 +32,8 @@ export interface ReadCircuitResult {
   issues: CircuitIssue[];
 }
 
+/** What to check when a time gives absurdly many rows or steps. */
+const PREFIX_HINT = 'check the prefix: m is milli, u is micro, n is nano';
 /** Above this many output rows a run is probably a typo in `output-step`. */
 const manyRows = 1e7;
 /** Above this many rows or steps a run could not finish (or its rows could not be kept): refused. */
@@ -167,8 +169,8 @@ function readSimulate(value: ValueReader | undefined, fastest: { part: string; t
   const rows = written === undefined ? defaultRows(duration, fastest) : undefined;
   const outputStep = written?.number(time, positive) ?? rows?.outputStep ?? NaN;
   if (outputStep > duration) written?.fail(`output-step ${formatSI(outputStep, 's')} is longer than the duration ${formatSI(duration, 's')}`, 'make it at most the duration, or leave it out: voltcast then chooses rows that show the fastest stimulus');
-  else if (duration / outputStep > mostRows) written?.fail(`output-step ${formatSI(outputStep, 's')} makes ${(duration / outputStep).toExponential(1)} rows, more than a run can write or keep (${mostRows.toExponential()})`, 'check the prefix: m is milli, u is micro, n is nano');
-  else if (duration / outputStep > manyRows) written?.warn(`output-step ${formatSI(outputStep, 's')} makes ${formatSI(duration / outputStep, '')} rows`, 'check the prefix: m is milli, u is micro, n is nano');
+  else if (duration / outputStep > mostRows) written?.fail(`output-step ${formatSI(outputStep, 's')} makes ${(duration / outputStep).toExponential(1)} rows, more than a run can write or keep (${mostRows.toExponential()})`, PREFIX_HINT);
+  else if (duration / outputStep > manyRows) written?.warn(`output-step ${formatSI(outputStep, 's')} makes ${formatSI(duration / outputStep, '')} rows`, PREFIX_HINT);
   else if (fastest !== undefined && fastest.timescale < duration && outputStep > fastest.timescale / 2) {
     written?.warn(
       `output-step ${formatSI(outputStep, 's')} is longer than half of ${fastest.part}'s ${formatSI(fastest.timescale, 's')} (its shortest period, level or segment): the rows, the CSV and the plot cannot show it (minimum and maximum still come from every step)`,
@@ -209,7 +211,7 @@ function readSimulate(value: ValueReader | undefined, fastest: { part: string; t
 
 /** A step so short against the duration that the run could not finish in any sensible time. */
 function refuseEndless(value: ValueReader, key: string, step: number, duration: number): void {
-  if (duration / step > mostSteps) value.fail(`${key} ${formatSI(step, 's')} makes ${(duration / step).toExponential(1)} steps, more than a run can finish (${mostSteps.toExponential()})`, 'check the prefix: m is milli, u is micro, n is nano');
+  if (duration / step > mostSteps) value.fail(`${key} ${formatSI(step, 's')} makes ${(duration / step).toExponential(1)} steps, more than a run can finish (${mostSteps.toExponential()})`, PREFIX_HINT);
 }
 
 /**

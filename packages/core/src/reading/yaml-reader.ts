@@ -24,16 +24,16 @@ export class IssueSink {
   }
 }
 
-/**
- * A value of the YAML document, read as the circuit format reads values. Failed reads record
- * an issue and return a placeholder, so one pass finds every problem.
- */
 /** Values at or beyond this size (or at or below its inverse, besides 0) are typing slips, and would overflow the arithmetic. */
 const PHYSICAL = 1e100;
 
 /** Longer node names are slips (a pasted block of text), and would fill every message. */
 const LONGEST_NAME = 200;
 
+/**
+ * A value of the YAML document, read as the circuit format reads values. Failed reads record
+ * an issue and return a placeholder, so one pass finds every problem.
+ */
 export class YamlValue implements ValueReader {
   readonly position?: SourcePosition;
   readonly part?: string;
