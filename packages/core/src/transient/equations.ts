@@ -3,6 +3,7 @@ import type { Assembly, Factorization } from '../solver/assembly.ts';
 import { DenseSystem } from '../solver/dense-system.ts';
 import { SparseSystem } from '../solver/sparse-system.ts';
 import { diagnoseSingular } from '../solver/diagnose.ts';
+import { allFinite } from './all-finite.ts';
 import type { Topology } from '../solver/topology.ts';
 import type { RunStats, SimulateOptions } from './result.ts';
 import { SimulationError } from './simulation-error.ts';
@@ -219,9 +220,4 @@ export class Equations {
     this.mna.save(FACTORED);
     this.factorValid = true;
   }
-}
-
-function allFinite(x: Float64Array): boolean {
-  for (let i = 0; i < x.length; i++) if (!Number.isFinite(x[i])) return false;
-  return true;
 }

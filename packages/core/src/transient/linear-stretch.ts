@@ -1,5 +1,6 @@
 import type { Device, StepInfo } from '../parts/device.ts';
 import { DenseSystem } from '../solver/dense-system.ts';
+import { allFinite } from './all-finite.ts';
 import { Propagator } from './propagator.ts';
 
 /** Propagators kept: per step size (rows, partial steps onto corners and sample instants) and per system. */
@@ -146,14 +147,18 @@ export class LinearStretch {
     return linear;
   }
 
-  /** The exact solution at `t + h` from `x` at `t` into `out`. False when the step's propagator cannot be built. */
+  /**
+   * The exact solution at `t + h` from `x` at `t` into `out`. False when the step's propagator
+   * cannot be built, or when the step overflows (a stretch that grows, as positive feedback
+   * does, faster than the step can follow): trapezoidal steps then follow it under error control.
+   */
   step(t: number, h: number, x: Float64Array, out: Float64Array): boolean {
     const propagator = this.propagatorFor(h, (this.end - t) / h);
     if (propagator === null) return false;
     this.steps++;
     propagator.prepare(this.stretches, this.p0, this.slope);
     propagator.apply(x, t - this.t0, out);
-    return true;
+    return allFinite(out);
   }
 
   /**
