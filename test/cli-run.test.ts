@@ -110,3 +110,17 @@ describe('voltcast run: signals between rows', () => {
     expect(readFileSync(join(out, 'waveforms.csv'), 'utf8').trimEnd().split('\n').length).toBe(20_002);
   });
 });
+
+describe('voltcast run: a duration far beyond settling', () => {
+  test('is a warning on stderr before the run, naming the duration and the slowest time constant, and in report.json', async () => {
+    // Before: `duration: 5` on a 1 ms RC ran with no word. RC = 1 kΩ · 1 µF = 1 ms (handbook).
+    const file = join(scratch, 'rc.yaml');
+    writeFileSync(file, 'circuit: invented-rc\nparts:\n  VIN: { voltage: { points: [[0, 0], [1m, 1]] }, between: [in, gnd] }\n  R1: { resistor: 1k, between: [in, out] }\n  C1: { capacitor: 1u, between: [out, gnd] }\nsimulate: { duration: 5 }\n');
+    const out = join(scratch, 'rc');
+    const { code, stderr } = await runCli(['run', file, '--out', out, '--quiet']);
+    expect(code).toBe(0);
+    expect(stderr).toBe(`${file}: warning: the duration 5 s is 5 k times the circuit's slowest time constant, 1 ms at node out, and its drive holds from 1 ms: the circuit has settled long before the end. Check the duration's prefix (m is milli, u is micro, n is nano), or end the run near 11 ms, the last change and 10 time constants\n`);
+    const report = JSON.parse(readFileSync(join(out, 'report.json'), 'utf8'));
+    expect(report.warnings.map((w: { kind: string; node: string }) => [w.kind, w.node])).toEqual([['duration', 'out']]);
+  });
+});

@@ -1,4 +1,4 @@
-import { formatSI, type AdcReport, type CodeError, type Findings } from '@voltcast/core';
+import { formatSI, type AdcReport, type CodeError, type Findings, type ReportWarning } from '@voltcast/core';
 
 /** One line of the timeline: when, what kind, on which part or node, the figures, and a hint. */
 interface Entry {
@@ -137,4 +137,9 @@ export function wrap(text: string, width: number, indent: string): string[] {
   }
   if (line !== '') lines.push(indent + line);
   return lines;
+}
+
+/** A warning found before the run starts, shown on stderr as the circuit file's own warnings are. */
+export function startWarningText(fileName: string, warning: ReportWarning): string {
+  return `${fileName}: warning: ${warning.message}`;
 }

@@ -2,6 +2,7 @@ import { availableParallelism } from 'node:os';
 import { writeFileSync } from 'node:fs';
 import { basename, extname, join } from 'node:path';
 import { assembleEnvelope, envelopePlan, runCircuit, type Envelope } from '@voltcast/core';
+import { startWarningText } from '../findings-text.ts';
 import { readCircuitFile } from '../read-circuit-file.ts';
 import { writeOutputDir } from '../output/output-dir.ts';
 import { InputError } from '../exit-codes.ts';
@@ -48,7 +49,7 @@ export async function envelopeCommand(file: string, options: EnvelopeCommandOpti
   const outDir = options.out ?? join('out', shard === undefined ? stem : `${stem}-part-${shard.index}-of-${shard.count}`);
   const { result, files } = await writeOutputDir(outDir, { force: options.force }, async (staging) => {
     const nominalStart = performance.now();
-    const nominal = runCircuit(circuit);
+    const nominal = runCircuit(circuit, { onWarning: (warning) => console.error(startWarningText(fileName, warning)) });
     const variants = range.end - range.from;
     const threads = Math.min(workers, Math.max(1, variants));
     const estimate = estimateText(variants, threads, (performance.now() - nominalStart) / 1000);

@@ -1,6 +1,7 @@
 import { writeFileSync } from 'node:fs';
 import { basename, extname, join } from 'node:path';
 import { runCircuit, type CircuitRun } from '@voltcast/core';
+import { startWarningText } from '../findings-text.ts';
 import { readCircuitFile } from '../read-circuit-file.ts';
 import { InputError } from '../exit-codes.ts';
 import { writeOutputDir } from '../output/output-dir.ts';
@@ -50,6 +51,7 @@ export async function runCommand(file: string, options: RunOptions): Promise<voi
           lastRow.set(values);
         },
         onProgress: (fraction) => progress.update(fraction),
+        onWarning: (warning) => console.error(startWarningText(fileName, warning)),
         ...(noise !== undefined ? { noise } : {}),
       });
     } finally {

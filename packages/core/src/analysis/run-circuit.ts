@@ -5,6 +5,8 @@ import { AdcSampler } from './adc/adc-sampler.ts';
 import type { AdcReadout } from './adc/adc-readout.ts';
 import { FindingsWatch } from './report/findings.ts';
 import type { Findings, FindingsOptions } from './report/types.ts';
+import { startWarnings } from './report/start-warnings.ts';
+import type { ReportWarning } from './ringing/types.ts';
 
 /**
  * Everything one run of a circuit produces: the waveforms, and what the analyses made of
@@ -30,6 +32,14 @@ export interface CircuitRun {
 export interface RunOptions extends SimulateOptions {
   /** Thresholds of the saturation and ringing analyses. */
   findings?: FindingsOptions;
+  /**
+   * Called with each warning found before the simulation starts (an amplifier on an unstable
+   * balance, a duration far beyond the circuit's settling), so that it can be shown before a
+   * long run; the findings list them too.
+   */
+  onWarning?: (warning: ReportWarning) => void;
+  /** False: skip those checks (a tolerance envelope's variants; its nominal run makes them). Default true. */
+  startChecks?: boolean;
 }
 
 /**
@@ -40,12 +50,14 @@ export interface RunOptions extends SimulateOptions {
 export function runCircuit(circuit: Circuit, options: RunOptions = {}): CircuitRun {
   const adcs = circuit.adcs.map((spec) => new AdcSampler(spec, circuit.simulate.duration));
   const watch = new FindingsWatch(circuit, options.findings);
+  const early = options.startChecks === false ? [] : startWarnings(circuit, options.noise !== undefined);
+  for (const warning of early) options.onWarning?.(warning);
   // Date.now: the core has no finer timer in every host it runs in; milliseconds suffice here.
   const started = Date.now();
   const transient = simulate(circuit, { ...options, observers: [...(options.observers ?? []), ...adcs, ...watch.observers] });
   const simulated = Date.now();
   const run = { circuit, transient, adcs: adcs.map((adc) => adc.readout()) };
-  const findings = watch.finish(transient, run.adcs.map((adc) => adc.report));
+  const findings = watch.finish(transient, run.adcs.map((adc) => adc.report), early);
   const during = watch.examineSeconds;
   const wallTime = { simulation: (simulated - started) / 1000 - during, analyses: (Date.now() - simulated) / 1000 + during };
   return { ...run, findings, wallTime };

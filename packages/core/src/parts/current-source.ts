@@ -25,6 +25,7 @@ export const currentSource: PartKind<CurrentSourceSpec> = {
   }),
   create: (spec) => new CurrentSourceDevice(spec),
   timescale: (spec) => spec.wave.timescale(),
+  holdsFrom: (spec) => spec.wave.holdsFrom(),
   tolerable: [sourceTolerance<CurrentSourceSpec>('current', quantities.current)],
 };
 

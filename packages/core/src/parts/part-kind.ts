@@ -47,4 +47,9 @@ export interface PartKind<Spec extends PartSpecBase = PartSpecBase> {
    * switch's schedule), for choosing default output rows; absent or Infinity when it has none.
    */
   timescale?(spec: Spec): number;
+  /**
+   * The time from which the part's own drive no longer changes (Infinity when it never stops,
+   * as a periodic one); absent when it has none. Tells when a circuit's drive has gone quiet.
+   */
+  holdsFrom?(spec: Spec): number;
 }

@@ -49,6 +49,7 @@ export const timedSwitch: PartKind<SwitchSpec> = {
   },
   create: (spec) => new SwitchDevice(spec),
   timescale: (spec) => shortestInterval(spec.schedule),
+  holdsFrom: ({ schedule: { edges, origin, period } }) => (period < Infinity ? Infinity : edges.length > 0 ? origin + edges[edges.length - 1] : 0),
 };
 
 /** The shortest time the switch stays in one state. */

@@ -25,6 +25,7 @@ export const voltageSource: PartKind<VoltageSourceSpec> = {
   }),
   create: (spec) => new VoltageSourceDevice(spec),
   timescale: (spec) => spec.wave.timescale(),
+  holdsFrom: (spec) => spec.wave.holdsFrom(),
   tolerable: [sourceTolerance<VoltageSourceSpec>('voltage', quantities.voltage)],
 };
 

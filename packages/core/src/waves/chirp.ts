@@ -41,6 +41,10 @@ export class ChirpWave implements Wave {
     return 1 / Math.max(this.from, this.to);
   }
 
+  holdsFrom(): number {
+    return Infinity;
+  }
+
   private sweepPhase(t: number): number {
     // Equal ends, or log ratios too small to divide by: a constant frequency.
     if (this.shape === 'linear' || Math.abs(this.logRatio) < 1e-12) return 2 * Math.PI * (this.from * t + ((this.to - this.from) * t * t) / (2 * this.duration));

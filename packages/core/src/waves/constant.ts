@@ -12,4 +12,7 @@ export class ConstantWave implements Wave {
   timescale(): number {
     return Infinity;
   }
+  holdsFrom(): number {
+    return 0;
+  }
 }

@@ -42,6 +42,10 @@ export class FmWave implements Wave {
   timescale(): number {
     return (2 * Math.PI) / (this.carrierOmega + this.index * this.rateOmega);
   }
+
+  holdsFrom(): number {
+    return Infinity;
+  }
 }
 
 /** `fm: { carrier: 10k, deviation: 2k, rate: 200, amplitude: 1, offset: 0, phase: 0 }`. */

@@ -59,6 +59,10 @@ export class NoiseWave implements Wave {
   timescale(): number {
     return 1 / this.bandwidth;
   }
+
+  holdsFrom(): number {
+    return Infinity;
+  }
 }
 
 interface Kernel {

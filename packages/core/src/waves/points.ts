@@ -67,6 +67,11 @@ export class PiecewiseLinearWave implements Wave {
     return this.period < Infinity && direction !== 0 ? Math.min(narrowest, this.period) : narrowest;
   }
 
+  /** The last point's time; a repeating pattern never holds. */
+  holdsFrom(): number {
+    return this.period < Infinity ? Infinity : this.times[this.times.length - 1];
+  }
+
   nextCorner(t: number): number {
     if (this.period < Infinity) return nextPeriodicCorner(t, 0, this.period, this.periodCorners);
     const times = this.times;

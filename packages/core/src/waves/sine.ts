@@ -32,6 +32,10 @@ export class SineWave implements Wave {
   timescale(): number {
     return 1 / this.frequency;
   }
+
+  holdsFrom(): number {
+    return Infinity;
+  }
 }
 
 /** `sine: { amplitude: 1, frequency: 1k, offset: 2.5, phase: 90, delay: 1m }`. */

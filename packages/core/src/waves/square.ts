@@ -43,6 +43,10 @@ export class SquareWave implements Wave {
   timescale(): number {
     return Math.min(this.fallStart, this.period - this.fallStart);
   }
+
+  holdsFrom(): number {
+    return Infinity;
+  }
 }
 
 /** `square: { low: 0, high: 5, frequency: 1k, duty: 25%, edge: 1u, delay: 0 }`. */

@@ -16,6 +16,10 @@ export class SumWave implements Wave {
     return Math.min(...this.members.map((m) => m.timescale()));
   }
 
+  holdsFrom(): number {
+    return Math.max(...this.members.map((m) => m.holdsFrom()));
+  }
+
   nextCorner(t: number): number {
     let corner = Infinity;
     for (let i = 0; i < this.members.length; i++) {

@@ -35,6 +35,10 @@ export class TriangleWave implements Wave {
   timescale(): number {
     return this.half;
   }
+
+  holdsFrom(): number {
+    return Infinity;
+  }
 }
 
 /** `triangle: { low: -1, high: 1, frequency: 500, delay: 2m }`. */

@@ -9,5 +9,6 @@ export function variedWave(wave: Wave, change: (value: number) => number): Wave 
     value: (t) => change(wave.value(t)),
     nextCorner: (t) => wave.nextCorner(t),
     timescale: () => wave.timescale(),
+    holdsFrom: () => wave.holdsFrom(),
   };
 }

@@ -19,6 +19,11 @@ export interface Wave {
    * rows are chosen to resolve it.
    */
   timescale(): number;
+  /**
+   * The time from which the wave holds its value for good; Infinity when it never does (a
+   * periodic wave, noise). Tells when a circuit's drive has gone quiet.
+   */
+  holdsFrom(): number;
 }
 
 /**

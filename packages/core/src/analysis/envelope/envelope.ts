@@ -96,7 +96,7 @@ export function runVariants(plan: EnvelopePlan, from: number, end: number, onRun
   for (const variant of planVariants(plan, from, end)) {
     let run: CircuitRun;
     try {
-      run = runCircuit(variant.circuit);
+      run = runCircuit(variant.circuit, { startChecks: false });
     } catch (error) {
       if (!(error instanceof SimulationError)) throw error;
       throw new SimulationError(`${describeVariant(plan, variant.index, variant.deviations)}: ${error.message}`, error.time, error.nodes, error.hint, error.parts);

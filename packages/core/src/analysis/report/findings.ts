@@ -3,12 +3,12 @@ import type { OpampSpec } from '../../parts/opamp.ts';
 import type { StepObserver } from '../../transient/observer.ts';
 import type { TransientResult } from '../../transient/result.ts';
 import type { AdcReport } from '../adc/adc-report.ts';
+import type { ReportWarning } from '../ringing/types.ts';
 import { RingingWatch } from '../ringing/ringing-watch.ts';
 import { TwoStepGuard } from '../ringing/two-step-guard.ts';
 import { SaturationTracker } from '../saturation/saturation-tracker.ts';
 import { ampDriving, ringingHint, saturationHint } from './hints.ts';
 import { stageShape } from './stage-shape.ts';
-import { unstableBalances } from './unstable-balance.ts';
 import { FINDINGS_SCHEMA, type Findings, type FindingsOptions } from './types.ts';
 
 /**
@@ -38,7 +38,8 @@ export class FindingsWatch {
     this.observers = [this.saturation, this.ringing, this.guard];
   }
 
-  finish(transient: TransientResult, adc: readonly AdcReport[] = []): Findings {
+  /** `early`: the warnings found before the run started (see startWarnings). */
+  finish(transient: TransientResult, adc: readonly AdcReport[] = [], early: readonly ReportWarning[] = []): Findings {
     const { circuit } = this;
     const found = this.saturation.results();
     const shapes = new Map(this.amps().map((a) => [a.name, { amp: a, shape: stageShape(circuit, a) }] as const));
@@ -55,7 +56,7 @@ export class FindingsWatch {
       const hint = amp ? ringingHint(finding, amp, shapes.get(amp.name)!.shape) : undefined;
       return hint ? { ...finding, hint } : finding;
     });
-    const allWarnings = [...unstableBalances(circuit), ...this.guard.warnings(), ...warnings].sort((a, b) => (a.time ?? 0) - (b.time ?? 0));
+    const allWarnings = [...early, ...this.guard.warnings(), ...warnings].sort((a, b) => (a.time ?? 0) - (b.time ?? 0));
     return {
       schema: FINDINGS_SCHEMA,
       saturation,

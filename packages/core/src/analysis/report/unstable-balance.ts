@@ -1,8 +1,6 @@
-import type { Circuit } from '../../circuit/circuit.ts';
 import { across } from '../../parts/solution.ts';
 import { amplifierState } from '../../small-signal/amplifier-state.ts';
-import { LinearizedCircuit } from '../../small-signal/linearized-circuit.ts';
-import { SimulationError } from '../../transient/simulation-error.ts';
+import type { LinearizedCircuit } from '../../small-signal/linearized-circuit.ts';
 import { formatSI } from '../../units/format.ts';
 import type { ReportWarning } from '../ringing/types.ts';
 
@@ -12,16 +10,7 @@ import type { ReportWarning } from '../ringing/types.ts';
  * exactly and nothing disturbs it, so the run shows the balance; the part itself would run to
  * a rail. One small-signal solve per linear amplifier at the t = 0 operating point.
  */
-export function unstableBalances(circuit: Circuit): ReportWarning[] {
-  if (!circuit.parts.some((part) => part.kind === 'opamp')) return [];
-  let linear: LinearizedCircuit;
-  try {
-    linear = new LinearizedCircuit(circuit);
-  } catch (error) {
-    // A part without a small-signal model: the check does not apply (the run itself succeeded).
-    if (error instanceof SimulationError) return [];
-    throw error;
-  }
+export function unstableBalances(linear: LinearizedCircuit): ReportWarning[] {
   const x = linear.operatingPoint;
   const re = new Float64Array(linear.size);
   const im = new Float64Array(linear.size);

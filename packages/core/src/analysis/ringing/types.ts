@@ -51,7 +51,7 @@ export interface RingingFinding {
 
 /** Something the designer should know that is not a finding about the circuit. */
 export interface ReportWarning {
-  readonly kind: 'solver' | 'resolution' | 'adc' | 'balance';
+  readonly kind: 'solver' | 'resolution' | 'adc' | 'balance' | 'duration';
   readonly message: string;
   readonly time?: number;
   readonly node?: string;
