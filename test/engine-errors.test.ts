@@ -53,3 +53,23 @@ simulate: { duration: 1m }
     expect(e.message).toContain('loop');
   });
 });
+
+describe('a drive far outside the circuit range', () => {
+  it('an integrator driven to 1e12 V and back in 1 µs stops at the edge with the step floor, not a false topology verdict', () => {
+    // Before: the first step after the edge was the step before it × 1e-3 (1e-18 s), the
+    // capacitor's C/h drowned every conductance, and the run ended with "no unique solution at out".
+    const e = failure(`
+circuit: invented-integrator
+parts:
+  TIP: { voltage: { points: [[0, 0], [0.5m, 0], [0.501m, 1], [2.5m, 1e12], [2.501m, 0]] }, between: [in, gnd] }
+  RIN: { resistor: 10k, between: [in, sum] }
+  CINT: { capacitor: 100n, between: [sum, out], initial: 0 }
+  AMP: { opamp: precision, plus: gnd, minus: sum, out: out, supply: [-12, 12] }
+simulate: { duration: 4m, output-step: 2u }
+`);
+    expect(e.message).toMatch(/^the step size fell below its floor at t = 2\.501 ms: /);
+    expect(Math.abs(e.time - 2.501e-3)).toBeLessThan(1e-9);
+    expect(e.nodes).toContain('out');
+    expect(e.hint).toMatch(/an edge much faster than the circuit around it/);
+  });
+});

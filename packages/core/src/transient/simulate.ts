@@ -160,7 +160,7 @@ export function simulate(circuit: Circuit, options: SimulateOptions = {}): Trans
       continue;
     }
 
-    let h = cut < Infinity ? cut : fixed !== undefined ? Math.min(natural, fixed) : sinceCorner === 0 ? Math.min(natural, corner - t) * FIRST_STEP_FRACTION : natural;
+    let h = cut < Infinity ? cut : fixed !== undefined ? Math.min(natural, fixed) : sinceCorner === 0 ? Math.max(Math.min(natural, corner - t) * FIRST_STEP_FRACTION, floor) : natural;
     h = Math.min(h, maxStep);
     let landing = false;
     // Stretch onto a landing point within eps, unless the last try was rejected: then the step
