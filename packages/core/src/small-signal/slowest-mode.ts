@@ -44,6 +44,7 @@ export function slowestMode(linear: LinearizedCircuit): SlowestMode | undefined 
     for (let e = 0; e < c.rows.length; e++) system.bRe[c.rows[e]] += c.values[e] * basis[j][c.cols[e]];
     const w = basis[j + 1];
     linear.solve(w, xIm);
+    const before = norm(w);
     // Modified Gram–Schmidt, twice: the basis stays orthogonal to working precision.
     for (let pass = 0; pass < 2; pass++) {
       for (let i = 0; i <= j; i++) {
@@ -54,8 +55,8 @@ export function slowestMode(linear: LinearizedCircuit): SlowestMode | undefined 
     }
     const size = norm(w);
     h.set(j + 1, j, size);
-    if (!(size > 1e-14 * Math.abs(h.get(j, j)) + Number.MIN_VALUE)) {
-      // An invariant subspace: its eigenvalues are exact.
+    if (!(size > 1e-12 * before)) {
+      // An invariant subspace (nothing new past rounding): its eigenvalues are exact.
       m = j + 1;
       break;
     }
@@ -66,7 +67,8 @@ export function slowestMode(linear: LinearizedCircuit): SlowestMode | undefined 
   const re = decomposition.realEigenvalues;
   const im = decomposition.imaginaryEigenvalues;
   const vectors = decomposition.eigenvectorMatrix;
-  const tail = m < k || m === n ? 0 : h.get(m, m - 1);
+  // The Ritz pair (μ, V·y) leaves a residual of h(m, m−1)·|y_m|.
+  const tail = h.get(m, m - 1);
   let best: { timeConstant: number; frequency: number; index: number } | undefined;
   for (let e = 0; e < m; e++) {
     const magnitude2 = re[e] * re[e] + im[e] * im[e];
