@@ -1,3 +1,4 @@
+import { spawn, spawnSync } from 'node:child_process';
 import { existsSync, mkdirSync, mkdtempSync, readFileSync, readdirSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
@@ -123,4 +124,31 @@ describe('voltcast run: a duration far beyond settling', () => {
     const report = JSON.parse(readFileSync(join(out, 'report.json'), 'utf8'));
     expect(report.warnings.map((w: { kind: string; node: string }) => [w.kind, w.node])).toEqual([['duration', 'out']]);
   });
+});
+
+// `script` (util-linux) gives the command a terminal, as a person running it has; without one no bar is drawn.
+const hasScript = spawnSync('script', ['--version']).status === 0;
+
+describe('voltcast run: progress on a terminal', () => {
+  test.skipIf(!hasScript)('a long run shows simulated time against the duration and the wall time left', async () => {
+    // Before: "t = 533 ms of 500 s" and nothing about how long the rest would take.
+    const file = join(scratch, 'long.yaml');
+    writeFileSync(file, 'circuit: invented-long\nparts:\n  VIN: { voltage: { sine: { amplitude: 1, frequency: 1k } }, between: [in, gnd] }\n  R1: { resistor: 1k, between: [in, out] }\n  C1: { capacitor: 100n, between: [out, gnd] }\nsimulate: { duration: 1000, output-step: 10u }\n');
+    const command = `${JSON.stringify(process.execPath)} ${JSON.stringify(join(repoRoot, 'packages/cli/bin/voltcast.mjs'))} run ${JSON.stringify(file)} --out ${JSON.stringify(join(scratch, 'long'))}`;
+    const screen = await new Promise<string>((resolve) => {
+      const child = spawn('script', ['-qec', command, '/dev/null'], { stdio: ['ignore', 'pipe', 'ignore'] });
+      let text = '';
+      // The estimate comes after 2 s of running; 8 s is the most this waits for it.
+      const stop = setTimeout(() => child.kill('SIGTERM'), 8_000);
+      child.stdout.setEncoding('utf8').on('data', (chunk: string) => {
+        text += chunk;
+        if (/about \d/.test(text)) child.kill('SIGTERM');
+      });
+      child.on('close', () => {
+        clearTimeout(stop);
+        resolve(text);
+      });
+    });
+    expect(screen).toMatch(/simulating .* \d+% \| t = [\d.]+ (ms|s) of 1 ks \| about [\d.]+ (s|min|h|days) left/);
+  }, 20_000);
 });
