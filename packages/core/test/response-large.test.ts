@@ -1,22 +1,14 @@
 import { describe, expect, it } from 'vitest';
-import { buildCircuit, frequencyResponse, noiseAnalysis } from '../src/index.ts';
+import { frequencyResponse, noiseAnalysis } from '../src/index.ts';
 import { LinearizedCircuit } from '../src/small-signal/linearized-circuit.ts';
+import { LADDER_C, LADDER_R, rcLadder as ladder } from './support/rc-ladder.ts';
 import { add, complex, dB, degrees, angleBetween, div, mul, type Complex } from './support/complex.ts';
 
-const [R, C] = [1e3, 10e-9];
+const [R, C] = [LADDER_R, LADDER_C];
 // CODATA 2018: the Boltzmann constant is exact in the SI since 2019.
 const K = 1.380649e-23;
 const T = 298.15;
 
-/** An RC ladder of `sections` (series R, shunt C), driven at `n0`, open at its far end. */
-function ladder(sections: number, extra: object = {}) {
-  const parts: Record<string, object> = { VIN: { voltage: 0, between: ['n0', 'gnd'] } };
-  for (let k = 1; k <= sections; k++) {
-    parts[`R${k}`] = { resistor: R, between: [`n${k - 1}`, `n${k}`] };
-    parts[`C${k}`] = { capacitor: C, between: [`n${k}`, 'gnd'] };
-  }
-  return buildCircuit({ circuit: 'invented-ladder', parts, simulate: { duration: '1m' }, record: [`n${sections}`, `n${sections >> 1}`], ...extra });
-}
 
 /**
  * The ladder's transfer to its far end by the chain (ABCD) matrices of its two-ports, a

@@ -3,18 +3,9 @@ import { describe, expect, it } from 'vitest';
 import { buildCircuit } from '../src/index.ts';
 import { LinearizedCircuit } from '../src/small-signal/linearized-circuit.ts';
 import { slowestMode } from '../src/small-signal/slowest-mode.ts';
+import { LADDER_C, LADDER_R, rcLadder as ladder } from './support/rc-ladder.ts';
 
-const [R, C] = [1e3, 10e-9];
-
-/** An RC ladder of `sections` (series R, shunt C), driven at `n0`, open at its far end. */
-function ladder(sections: number) {
-  const parts: Record<string, object> = { VIN: { voltage: 1, between: ['n0', 'gnd'] } };
-  for (let k = 1; k <= sections; k++) {
-    parts[`R${k}`] = { resistor: R, between: [`n${k - 1}`, `n${k}`] };
-    parts[`C${k}`] = { capacitor: C, between: [`n${k}`, 'gnd'] };
-  }
-  return buildCircuit({ circuit: 'invented-ladder', parts, simulate: { duration: '1m' } });
-}
+const [R, C] = [LADDER_R, LADDER_C];
 
 describe('the slowest natural mode of a linearized circuit', () => {
   it('a series RLC loaded by a resistor decays and rings as the roots of its characteristic equation, within 1e-9', () => {
