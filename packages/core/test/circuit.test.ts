@@ -199,6 +199,8 @@ describe('errors say what, where and what to do', () => {
     const { circuit, issues } = readCircuit(text);
     expect(circuit).toBeDefined();
     expect(issues).toMatchObject([{ severity: 'warning', message: "node 'sense' is only connected to R2", part: 'R2', position: { line: 6, column: 38 } }]);
+    // The hint names the file's own key (`record:`), as the fix below writes it.
+    expect(issues[0].hint).toBe('nothing else connects to it: check the spelling, or add it to record: if it is a test point (record: [..., sense])');
     expect(readCircuit(`${text}record: [out, sense]\n`).issues).toEqual([]);
   });
 

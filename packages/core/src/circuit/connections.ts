@@ -53,7 +53,7 @@ export function checkConnections(parts: readonly PartSpecBase[], recorded: reado
       message: `node '${node}' is only connected to ${part}`,
       hint: near !== undefined
         ? `did you mean '${near}'?`
-        : 'nothing else connects to it: check the spelling, or list it under recorded if it is a test point',
+        : `nothing else connects to it: check the spelling, or add it to record: if it is a test point (record: [..., ${node}])`,
       path: pin.path,
       part,
       position: pin.position,
