@@ -117,6 +117,27 @@ describe('sparse LU against mathjs slu/lusolve (reference library from the npm r
     expect(Array.from(x)).toEqual([2, 2]);
   });
 
+  it('judges each pivot against its own column: a 1e20 column leaves the others solvable (was refused as singular)', () => {
+    const entries = [
+      { row: 0, col: 0, value: 2e20 },
+      { row: 1, col: 0, value: -1e20 },
+      { row: 0, col: 1, value: -1e-3 },
+      { row: 1, col: 1, value: 2e-3 },
+      { row: 2, col: 1, value: -1e-3 },
+      { row: 1, col: 2, value: -1e-3 },
+      { row: 2, col: 2, value: 2e-3 },
+    ];
+    const b = Float64Array.of(1, 0, 1e-3);
+    const system = new SparseSystem(3);
+    stamp(system, entries);
+    const lu = system.factorization();
+    expect(lu.factor()).toBe(-1);
+    const x = new Float64Array(3);
+    lu.solve(b, x);
+    const expected = reference(3, entries, b);
+    for (let i = 0; i < 3; i++) expect(Math.abs(x[i] / expected[i] - 1)).toBeLessThan(1e-12);
+  });
+
   it('reports the unknown a singular matrix leaves undetermined, by its own index', () => {
     // Unknown 2 appears in no equation: its column is empty whatever the order.
     const system = new SparseSystem(4);

@@ -12,25 +12,31 @@ export class LuSolver {
   private readonly lu: Float64Array;
   private readonly perm: Int32Array;
   private readonly work: Float64Array;
+  /** Each column's largest entry before elimination: the scale its pivot is judged against. */
+  private readonly columnLargest: Float64Array;
 
   constructor(readonly size: number) {
     this.lu = new Float64Array(size * size);
     this.perm = new Int32Array(size);
     this.work = new Float64Array(size);
+    this.columnLargest = new Float64Array(size);
   }
 
   /**
    * Factor the row-major matrix `a` (left unchanged). Returns -1 on success, or the first
-   * column whose pivot is negligible against the matrix's largest entry: the unknown that
-   * the equations do not determine.
+   * column whose pivot is negligible against that column's own largest entry: the unknown
+   * that the equations do not determine. Judged per column, not against the whole matrix: a
+   * huge capacitor's C/h in its own column leaves the others' pivots as good as they were.
    */
   factor(a: Float64Array): number {
     const n = this.size;
     const lu = this.lu;
+    const columnLargest = this.columnLargest;
     lu.set(a);
-    let largest = 0;
-    for (let i = 0; i < lu.length; i++) largest = Math.max(largest, Math.abs(lu[i]));
-    const floor = largest * n * 1e-15;
+    columnLargest.fill(0);
+    for (let r = 0; r < n; r++) {
+      for (let c = 0; c < n; c++) columnLargest[c] = Math.max(columnLargest[c], Math.abs(lu[r * n + c]));
+    }
     for (let r = 0; r < n; r++) this.perm[r] = r;
     for (let k = 0; k < n; k++) {
       let p = k;
@@ -42,7 +48,8 @@ export class LuSolver {
           p = r;
         }
       }
-      if (!(best > floor)) return k;
+      // Elimination adds to column k only multiples (at most 1, with partial pivoting) of its own entries.
+      if (!(best > columnLargest[k] * n * 1e-15)) return k;
       if (p !== k) {
         for (let c = 0; c < n; c++) {
           const t = lu[k * n + c];

@@ -15,7 +15,11 @@ export interface SparseMatrix {
 const DIAGONAL_PREFERENCE = 0.1;
 /** A refactorization keeps the old pivot sequence while each pivot is at least this fraction of its column's largest. */
 const REFACTOR_PIVOT_RATIO = 1e-3;
-/** A pivot this small against the matrix's largest entry leaves its unknown undetermined. */
+/**
+ * A pivot this small against its column's largest entry leaves its unknown undetermined.
+ * Per column, not against the whole matrix: elimination adds to a column only multiples of its
+ * own entries, and a huge capacitor's C/h in one column leaves the others' pivots as they were.
+ */
 const SINGULAR_RATIO = 1e-13;
 
 /**
@@ -81,16 +85,21 @@ export class SparseLu implements Factorization {
       this.analysedVersion = pattern.version;
       this.structured = false;
     }
-    const values = system.values;
+    if (this.structured && this.refactor()) return -1;
+    return this.pivotingFactor();
+  }
+
+  /** The smallest pivot that determines unknown `col`: SINGULAR_RATIO of its column's largest entry. */
+  private floorOf(col: number): number {
+    const { colStart } = this.system.pattern;
+    const values = this.system.values;
     let largest = 0;
-    for (let p = 0; p < values.length; p++) largest = Math.max(largest, Math.abs(values[p]));
-    const floor = largest * SINGULAR_RATIO;
-    if (this.structured && this.refactor(floor)) return -1;
-    return this.pivotingFactor(floor);
+    for (let p = colStart[col]; p < colStart[col + 1]; p++) largest = Math.max(largest, Math.abs(values[p]));
+    return largest * SINGULAR_RATIO;
   }
 
   /** Numeric factorization with the kept pivot sequence; false when a pivot became unfit. */
-  private refactor(floor: number): boolean {
+  private refactor(): boolean {
     const { n, columnOrder, rowStep, lStart, lRows, lValues, uStart, uRows, uValues, diagonal } = this;
     const x = this.work;
     const { colStart, rows } = this.system.pattern;
@@ -112,7 +121,7 @@ export class SparseLu implements Factorization {
       let largest = 0;
       for (let p = lStart[k]; p < lStart[k + 1]; p++) largest = Math.max(largest, Math.abs(x[lRows[p]]));
       const size = Math.abs(pivot);
-      if (!(size > floor) || size < REFACTOR_PIVOT_RATIO * largest) {
+      if (!(size > this.floorOf(col)) || size < REFACTOR_PIVOT_RATIO * largest) {
         this.structured = false;
         return false;
       }
@@ -123,7 +132,7 @@ export class SparseLu implements Factorization {
   }
 
   /** Factorization that chooses pivots and finds the patterns of L and U; -1 or the undetermined unknown. */
-  private pivotingFactor(floor: number): number {
+  private pivotingFactor(): number {
     const { n, columnOrder, rowStep, pivotRow, lStart, uStart, diagonal, mark } = this;
     const x = this.work;
     const reached = this.reached;
@@ -165,7 +174,7 @@ export class SparseLu implements Factorization {
           best = i;
         }
       }
-      if (best < 0 || !(largest > floor)) return col;
+      if (best < 0 || !(largest > this.floorOf(col))) return col;
       if (mark[col] === k && rowStep[col] < 0 && Math.abs(x[col]) >= DIAGONAL_PREFERENCE * largest) best = col;
       const pivot = x[best];
       diagonal[k] = pivot;
