@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { SimulationError } from '@voltcast/core';
+import { SimulationError, buildCircuit, runCircuit } from '@voltcast/core';
 import { runText } from './support/run-text.ts';
 
 function failure(yaml: string): SimulationError {
@@ -51,6 +51,44 @@ simulate: { duration: 1m }
 `);
     expect(e.parts).toEqual(['V1', 'L1']);
     expect(e.message).toContain('loop');
+  });
+});
+
+describe('values far outside the circuit range', () => {
+  it.each(['dense', 'sparse'] as const)('a 1 GF capacitor charges through 1 kΩ as the handbook ramp response says (%s matrix)', (matrix) => {
+    // Before: "no unique solution at in" at the first step: C/h = 1e18 beside 1 mS made every
+    // other pivot look like rounding. Handbook (RC ramp response): with τ = RC = 1e12 s far
+    // beyond the run, v(t) = 5·(t − T/2)/τ after a ramp of T = 1 µs to 5 V, to 1e-14 relative.
+    const circuit = buildCircuit({
+      circuit: 'invented-huge-capacitor',
+      parts: {
+        V1: { voltage: { points: [[0, 0], ['1u', 5]] }, between: ['in', 'gnd'] },
+        R1: { resistor: '1k', between: ['in', 'a'] },
+        CX: { capacitor: '1G', between: ['a', 'gnd'] },
+      },
+      simulate: { duration: '10m' },
+    });
+    const run = runCircuit(circuit, { matrix });
+    const expected = (5 * (10e-3 - 0.5e-6)) / 1e12;
+    expect(Math.abs(run.transient.valueAt('a', 10e-3) / expected - 1)).toBeLessThan(1e-6);
+  });
+
+  it('a 1 GF capacitor to a plate joined to nothing else says the values are too far apart, not that the circuit has no solution', () => {
+    const e = failure(`
+circuit: invented-floating-plate
+parts:
+  V1: { voltage: { points: [[0, 0], [1u, 5]] }, between: [in, gnd] }
+  R1: { resistor: 1k, between: [in, a] }
+  R2: { resistor: 1k, between: [a, gnd] }
+  CX: { capacitor: 1G, between: [a, b], initial: 0 }
+simulate: { duration: 10m }
+record: [a, b]
+`);
+    expect(e.message).toBe('the circuit equations at b are too ill-conditioned to solve: the values there (CX, and what drives them) are more decades apart than double precision holds');
+    expect(e.nodes).toEqual(['b']);
+    expect(e.parts).toEqual(['CX']);
+    expect(e.hint).toMatch(/missing or wrong prefix/);
+    expect(e.time).toBeGreaterThan(0);
   });
 });
 

@@ -12,14 +12,25 @@ export interface SingularCause {
 /**
  * Explain a singular matrix by its usual causes, checked on the circuit's graph: a loop of
  * voltage-defined branches (sources, inductors at DC, held capacitors), then nodes that float
- * (nothing that conducts at DC joins them to ground). `unknown` is the column the factorization stopped at, the fallback culprit.
+ * (nothing that conducts at DC joins them to ground). `unknown` is the column the
+ * factorization stopped at, the fallback culprit. During a time step (`stepping`) a graph
+ * that passes both checks was solvable at the operating point: what is left is arithmetic,
+ * values around that unknown too many decades apart for double precision.
  */
-export function diagnoseSingular(devices: readonly Device[], topology: Topology, unknown: number): SingularCause {
-  return findVoltageLoop(devices, topology) ?? findFloatingNodes(devices, topology) ?? {
-    message: `the circuit equations have no unique solution at ${topology.labels[unknown] ?? 'an unknown'}`,
-    nodes: unknown >= 0 && unknown < topology.size ? [topology.labels[unknown]] : [],
-    parts: [],
-    hint: 'check that a resistor, source or inductor joins every node to gnd, and that no two sources fix the same voltage',
+export function diagnoseSingular(devices: readonly Device[], topology: Topology, unknown: number, stepping: boolean): SingularCause {
+  const found = findVoltageLoop(devices, topology) ?? findFloatingNodes(devices, topology);
+  if (found !== undefined) return found;
+  const label = topology.labels[unknown] ?? 'an unknown';
+  const nodes = unknown >= 0 && unknown < topology.size ? [label] : [];
+  if (!stepping) {
+    return { message: `the circuit equations have no unique solution at ${label}`, nodes, parts: [], hint: 'check that a resistor, source or inductor joins every node to gnd, and that no two sources fix the same voltage' };
+  }
+  const parts = devices.filter((d) => d.links().some((link) => link.a === unknown || link.b === unknown)).map((d) => d.name);
+  return {
+    message: `the circuit equations at ${label} are too ill-conditioned to solve: the values there (${parts.length > 0 ? listWords(parts) : 'its parts'}, and what drives them) are more decades apart than double precision holds`,
+    nodes,
+    parts,
+    hint: 'check those values and the sources for a missing or wrong prefix (a 1G capacitor, a 1e25 V point): a value many decades from the rest of the circuit leaves this node undetermined in arithmetic',
   };
 }
 

@@ -213,7 +213,7 @@ export class Equations {
     const singular = this.lu.factor();
     this.stats.factorizations++;
     if (singular >= 0) {
-      const cause = diagnoseSingular(this.devices, this.topology, singular);
+      const cause = diagnoseSingular(this.devices, this.topology, singular, step.method !== 'dc');
       // The time travels in the error's `time` field (NaN for the operating point).
       throw new SimulationError(cause.message, step.method === 'dc' ? NaN : step.t, cause.nodes, cause.hint, cause.parts);
     }
