@@ -268,6 +268,6 @@ function stuck(t: number, nodes: string[], why: string): SimulationError {
     `the step size fell below its floor at t = ${formatSI(t, 's', 6)}: ${why} at ${nodes.join(', ')}`,
     t,
     nodes,
-    'look for an edge much faster than the circuit around it, a missing resistance in a loop, or loosen `accuracy: { relative }`',
+    'look for an edge much faster than the circuit around it, a source value far beyond its supplies (a missing or wrong prefix), a missing resistance in a loop, or loosen `accuracy: { relative }`',
   );
 }
