@@ -153,6 +153,17 @@ describe('replacing an earlier run', () => {
     expect(readdirSync(scratch).sort()).toEqual([live.slice(scratch.length + 1), 'run'].sort());
   });
 
+  test('an interrupted run into a sibling folder is swept too; names that only look alike stay', async () => {
+    // Before: only the staging folders of the same output folder went; an interrupted run into
+    // out/a left `.a.voltcast-partial-…` beside every later run into out/b.
+    const ended = endedPid();
+    const leftovers = [`.other.voltcast-partial-${ended}-abcd1234`, `.voltcast-partial-${ended}-abcd1234`];
+    const lookalikes = [`.other.voltcast-partial-${ended}-notes`, `other.voltcast-partial-${ended}-abcd1234`];
+    for (const name of [...leftovers, ...lookalikes]) mkdirSync(join(scratch, name));
+    await writeOutputDir(join(scratch, 'run'), {}, writing({ 'a.csv': '' }));
+    expect(readdirSync(scratch).sort()).toEqual([...lookalikes, 'run'].sort());
+  });
+
   test('two runs into one folder at once both finish; the later one is what the folder holds', async () => {
     const target = join(scratch, 'run');
     let releaseFirst!: () => void;

@@ -39,7 +39,7 @@ export async function writeOutputDir<T>(dir: string, options: OutputOptions, wri
     // Beside the folder when it may be replaced whole (the rename needs the same parent), else inside it.
     const home = before.kind === 'absent' || replaceableWhole(before, target) ? parent : target;
     const prefix = home === parent ? `.${basename(target)}.voltcast-partial-` : '.voltcast-partial-';
-    sweepInterrupted(home, prefix);
+    sweepInterrupted(home);
     staging = join(home, `${prefix}${process.pid}-${randomBytes(4).toString('hex')}`);
     mkdirSync(staging);
     const value = await write(staging);
@@ -125,12 +125,17 @@ function removeListed(folder: string, marker: Marker): void {
   }
 }
 
-/** The staging folders of voltcast processes that have ended (interrupted runs); live ones stay. */
-function sweepInterrupted(home: string, prefix: string): void {
+/** A staging folder's name, for any output folder: `.NAME.voltcast-partial-PID-XXXXXXXX` or `.voltcast-partial-PID-XXXXXXXX`. */
+const STAGING_NAME = /^\.(?:.+\.)?voltcast-partial-(\d+)-[0-9a-f]{8}$/;
+
+/**
+ * The staging folders in `home` of voltcast processes that have ended (interrupted runs, for
+ * this output folder or a sibling); those of live processes stay.
+ */
+function sweepInterrupted(home: string): void {
   for (const name of readdirSync(home)) {
-    if (!name.startsWith(prefix)) continue;
-    const pid = Number.parseInt(name.slice(prefix.length), 10);
-    if (Number.isInteger(pid) && !processAlive(pid)) rmSync(join(home, name), { recursive: true, force: true });
+    const pid = STAGING_NAME.exec(name)?.[1];
+    if (pid !== undefined && !processAlive(Number(pid))) rmSync(join(home, name), { recursive: true, force: true });
   }
 }
 
