@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { formatSI, parseQuantity, quantities as q } from '../src/units/index.ts';
 import type { Quantity } from '../src/units/index.ts';
+import { decimalRounded } from '../src/units/decimal.ts';
 
 // SI prefix values: the SI Brochure (BIPM, 9th edition), table 7. The prefixes are exact
 // powers of ten, so every expected value below is written as the same decimal literal.
@@ -125,5 +126,18 @@ describe('formatSI', () => {
   it('keeps an exponent beyond the prefix range', () => {
     expect(formatSI(1e15, 'Ω')).toBe('1e+6 GΩ');
     expect(formatSI(Infinity, 's')).toBe('Infinity s');
+  });
+});
+
+describe('decimalRounded', () => {
+  it('gives the double nearest the 15-digit decimal, as the ECMAScript toPrecision(15) and Number() do, on grid times k·step', () => {
+    // Reference: ECMAScript Number.prototype.toPrecision and the string-to-number conversion.
+    let differing = 0;
+    for (const step of [1e-6, 2.5e-6, 500e-9, 1e-4, 1 / 3e5, 3e-9, 0.02]) {
+      for (let k = 0; k < 20_000; k++) if (decimalRounded(k * step) !== Number((k * step).toPrecision(15))) differing++;
+    }
+    expect(differing).toBe(0);
+    expect(decimalRounded(3 * 0.1e-3)).toBe(0.0003);
+    expect(decimalRounded(-7e300 * 3)).toBe(-2.1e301);
   });
 });
