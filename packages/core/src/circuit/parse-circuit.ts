@@ -10,7 +10,7 @@ import { readTolerances } from './read-tolerance.ts';
 import { checkConnections, nodesInOrder } from './connections.ts';
 import { checkOpenPins } from './open-pins.ts';
 import { suggestion } from '../reading/suggest.ts';
-import { partKinds } from '../parts/index.ts';
+import { partKind, partKinds } from '../parts/index.ts';
 import { readAdcSection } from './read-adc.ts';
 import { readResponseSection } from './read-response.ts';
 import { readNoiseSection } from './read-noise.ts';
@@ -154,7 +154,7 @@ function readPart(name: string, value: ValueReader, context: ReadContext): PartS
 function fastestPart(specs: readonly PartSpecBase[]): { part: string; timescale: number } | undefined {
   let fastest: { part: string; timescale: number } | undefined;
   for (const spec of specs) {
-    const timescale = partKinds.find((k) => k.key === spec.kind)?.timescale?.(spec) ?? Infinity;
+    const timescale = partKind(spec.kind).timescale?.(spec) ?? Infinity;
     if (timescale > 0 && timescale < (fastest?.timescale ?? Infinity)) fastest = { part: spec.name, timescale };
   }
   return fastest;
@@ -177,17 +177,8 @@ function readSimulate(value: ValueReader | undefined, fastest: { part: string; t
       `write output-step: ${formatSI(fastest.timescale / simulateDefaults.rowsPerTimescale, 's')} or less, or leave it out for rows chosen to show it`,
     );
   }
-  if (fastest !== undefined && duration / fastest.timescale > mostSteps) {
-    keys?.get('duration')?.fail(
-      `the duration ${formatSI(duration, 's')} is ${(duration / fastest.timescale).toExponential(1)} times ${fastest.part}'s ${formatSI(fastest.timescale, 's')} (its shortest period, level or segment): more steps than a run can finish (${mostSteps.toExponential()})`,
-      `check ${fastest.part}'s frequency and the duration's prefix`,
-    );
-  } else if (fastest !== undefined && duration / fastest.timescale > manyTimescales) {
-    keys?.get('duration')?.warn(
-      `the duration ${formatSI(duration, 's')} is ${formatSI(duration / fastest.timescale, '')} times ${fastest.part}'s ${formatSI(fastest.timescale, 's')} (its shortest period, level or segment), and each needs several steps: expect a long run`,
-      `check ${fastest.part}'s frequency and the duration's prefix`,
-    );
-  }
+  const durationValue = keys?.get('duration');
+  if (fastest !== undefined && durationValue !== undefined) checkTimescales(durationValue, duration, fastest);
   const fixedValue = keys?.get('fixed-step');
   const fixedStep = fixedValue?.number(time, positive);
   if (fixedStep !== undefined && fixedStep > duration) fixedValue?.fail(`fixed-step ${formatSI(fixedStep, 's')} is longer than the duration ${formatSI(duration, 's')}`);
@@ -207,6 +198,15 @@ function readSimulate(value: ValueReader | undefined, fastest: { part: string; t
   };
   keys?.finish();
   return settings;
+}
+
+/** A duration of so many of the fastest part's timescales that the run is long (a warning) or endless (refused). */
+function checkTimescales(value: ValueReader, duration: number, fastest: { part: string; timescale: number }): void {
+  const timescales = duration / fastest.timescale;
+  const hint = `check ${fastest.part}'s frequency and the duration's prefix`;
+  const against = `${fastest.part}'s ${formatSI(fastest.timescale, 's')} (its shortest period, level or segment)`;
+  if (timescales > mostSteps) value.fail(`the duration ${formatSI(duration, 's')} is ${timescales.toExponential(1)} times ${against}: more steps than a run can finish (${mostSteps.toExponential()})`, hint);
+  else if (timescales > manyTimescales) value.warn(`the duration ${formatSI(duration, 's')} is ${formatSI(timescales, '')} times ${against}, and each needs several steps: expect a long run`, hint);
 }
 
 /** A step so short against the duration that the run could not finish in any sensible time. */

@@ -142,9 +142,11 @@ function readTimes(m: MapReader, duration: number): SampleTimes {
   if (rateValue === undefined) m.fail('an ADC needs `rate:` or `times:`', 'write e.g. `rate: 20k` (samples per second)');
   const rate = rateValue?.number(quantities.sampleRate, { above: 0 }) ?? NaN;
   const start = m.numberOr('start', quantities.time, 0, { min: 0 });
+  const samples = (duration - start) * rate;
+  const prefixHint = 'check the prefix: k is kilo, M is mega, m is milli';
   if (start > duration) startValue?.fail(`start ${formatSI(start, 's')} is after the end of the run (${formatSI(duration, 's')})`, 'make it at most the duration under simulate');
-  else if ((duration - start) * rate > mostSamples) rateValue?.fail(`rate ${formatSI(rate, 'Hz')} makes ${((duration - start) * rate).toExponential(1)} samples, more than a run can keep (${mostSamples.toExponential()})`, 'check the prefix: k is kilo, M is mega, m is milli');
-  else if ((duration - start) * rate > manySamples) rateValue?.warn(`rate ${formatSI(rate, 'Hz')} makes ${formatSI((duration - start) * rate, '')} samples`, 'check the prefix: k is kilo, M is mega, m is milli');
+  else if (samples > mostSamples) rateValue?.fail(`rate ${formatSI(rate, 'Hz')} makes ${samples.toExponential(1)} samples, more than a run can keep (${mostSamples.toExponential()})`, prefixHint);
+  else if (samples > manySamples) rateValue?.warn(`rate ${formatSI(rate, 'Hz')} makes ${formatSI(samples, '')} samples`, prefixHint);
   return { rate, start };
 }
 

@@ -89,15 +89,6 @@ export class SparseLu implements Factorization {
     return this.pivotingFactor();
   }
 
-  /** The smallest pivot that determines unknown `col`: SINGULAR_RATIO of its column's largest entry. */
-  private floorOf(col: number): number {
-    const { colStart } = this.system.pattern;
-    const values = this.system.values;
-    let largest = 0;
-    for (let p = colStart[col]; p < colStart[col + 1]; p++) largest = Math.max(largest, Math.abs(values[p]));
-    return largest * SINGULAR_RATIO;
-  }
-
   /** Numeric factorization with the kept pivot sequence; false when a pivot became unfit. */
   private refactor(): boolean {
     const { n, columnOrder, rowStep, lStart, lRows, lValues, uStart, uRows, uValues, diagonal } = this;
@@ -109,7 +100,11 @@ export class SparseLu implements Factorization {
       for (let p = lStart[k]; p < lStart[k + 1]; p++) x[lRows[p]] = 0;
       x[k] = 0;
       const col = columnOrder[k];
-      for (let p = colStart[col]; p < colStart[col + 1]; p++) x[rowStep[rows[p]]] += values[p];
+      let scale = 0;
+      for (let p = colStart[col]; p < colStart[col + 1]; p++) {
+        x[rowStep[rows[p]]] += values[p];
+        scale = Math.max(scale, Math.abs(values[p]));
+      }
       for (let p = uStart[k]; p < uStart[k + 1]; p++) {
         const j = uRows[p];
         const u = x[j];
@@ -121,7 +116,7 @@ export class SparseLu implements Factorization {
       let largest = 0;
       for (let p = lStart[k]; p < lStart[k + 1]; p++) largest = Math.max(largest, Math.abs(x[lRows[p]]));
       const size = Math.abs(pivot);
-      if (!(size > this.floorOf(col)) || size < REFACTOR_PIVOT_RATIO * largest) {
+      if (!(size > scale * SINGULAR_RATIO) || size < REFACTOR_PIVOT_RATIO * largest) {
         this.structured = false;
         return false;
       }
@@ -150,7 +145,11 @@ export class SparseLu implements Factorization {
       const col = columnOrder[k];
       const top = this.reach(col, k);
       for (let p = top; p < n; p++) x[reached[p]] = 0;
-      for (let p = colStart[col]; p < colStart[col + 1]; p++) x[rows[p]] += values[p];
+      let scale = 0;
+      for (let p = colStart[col]; p < colStart[col + 1]; p++) {
+        x[rows[p]] += values[p];
+        scale = Math.max(scale, Math.abs(values[p]));
+      }
       // Rows reached are in topological order: each pivotal one is final when its turn comes.
       const lRows = this.lRows;
       const lValues = this.lValues;
@@ -174,7 +173,7 @@ export class SparseLu implements Factorization {
           best = i;
         }
       }
-      if (best < 0 || !(largest > this.floorOf(col))) return col;
+      if (best < 0 || !(largest > scale * SINGULAR_RATIO)) return col;
       if (mark[col] === k && rowStep[col] < 0 && Math.abs(x[col]) >= DIAGONAL_PREFERENCE * largest) best = col;
       const pivot = x[best];
       diagonal[k] = pivot;

@@ -1,5 +1,5 @@
 import type { Circuit } from '../../circuit/circuit.ts';
-import { partKinds } from '../../parts/index.ts';
+import { partKind } from '../../parts/index.ts';
 import { LinearizedCircuit } from '../../small-signal/linearized-circuit.ts';
 import { SimulationError } from '../../transient/simulation-error.ts';
 import type { ReportWarning } from '../ringing/types.ts';
@@ -15,7 +15,7 @@ import { unstableBalances } from './unstable-balance.ts';
  */
 export function startWarnings(circuit: Circuit, noisy: boolean): ReportWarning[] {
   const amplifiers = circuit.parts.some((part) => part.kind === 'opamp');
-  const quietFrom = Math.max(0, ...circuit.parts.map((spec) => partKinds.find((k) => k.key === spec.kind)?.holdsFrom?.(spec) ?? 0));
+  const quietFrom = circuit.parts.reduce((latest, spec) => Math.max(latest, partKind(spec.kind).holdsFrom?.(spec) ?? 0), 0);
   const mayBeLong = !noisy && circuit.simulate.duration > FAR_BEYOND * quietFrom;
   if (!amplifiers && !mayBeLong) return [];
   try {
